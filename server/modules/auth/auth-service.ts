@@ -1,0 +1,141 @@
+import type {
+  CurrentUser,
+  PasswordResetConfirm,
+  PreferencesUpdate,
+  SignInInput,
+} from '../../../shared/auth/auth-schemas.ts';
+import { config } from '../../config.ts';
+import { withTransaction, type Tx } from '../../db/sequelize.ts';
+import { AppError } from '../../lib/app-error.ts';
+import { logger } from '../../lib/logger.ts';
+import { mailLayout, sendMail } from '../../lib/mailer.ts';
+import { burnPasswordCheck, hashPassword, verifyPassword } from '../../lib/password.ts';
+import { hashToken, newLinkToken } from '../../lib/tokens.ts';
+import * as workshopsService from '../workshops/workshops-service.ts';
+import * as resetTokens from './password-reset-repository.ts';
+import * as limiter from './sign-in-limiter.ts';
+import * as users from './users-repository.ts';
+
+export const PASSWORD_RESET_LIFETIME_MS = 60 * 60 * 1000;
+
+export async function currentUser(userId: string): Promise<CurrentUser | null> {
+  const user = await users.findById(userId);
+  if (!user) return null;
+  return {
+    id: user.id,
+    email: user.email,
+    displayName: user.displayName,
+    temperatureUnit: user.temperatureUnit,
+    massUnit: user.massUnit,
+    theme: user.theme,
+    memberships: await workshopsService.membershipsOf(user.id),
+  };
+}
+
+/** Creates an account; used by sign-up and by accepting an invitation. */
+export async function createAccount(
+  input: { email: string; password: string; displayName: string; temperatureUnit?: 'C' | 'F'; massUnit?: 'g' | 'oz' },
+  tx?: Tx,
+) {
+  const passwordHash = await hashPassword(input.password, config().auth.bcryptCost);
+  return users.create({ ...input, passwordHash }, tx);
+}
+
+export async function findAccountByEmail(email: string) {
+  return users.findByEmail(email);
+}
+
+/**
+ * Sign-up never says whether an address is registered: for a taken address
+ * the owner gets a mail pointing to sign-in and password reset, and the caller
+ * gets the same "check your e-mail" answer a mail-confirmation flow would give.
+ */
+export async function signUp(
+  input: { email: string; password: string; displayName: string; temperatureUnit: 'C' | 'F'; massUnit: 'g' | 'oz' },
+  address: string,
+): Promise<{ userId: string } | { status: 'check-email' }> {
+  const existing = await users.findByEmail(input.email);
+  if (existing) {
+    await limiter.consumeMailRequest(`sign-up:${input.email}`, `sign-up-ip:${address}`);
+    const origin = config().http.origin;
+    await sendMail({
+      to: existing.email,
+      subject: 'Someone tried to open a Pourscope account with your address',
+      text: `An account for ${existing.email} already exists. Sign in at ${origin}/sign-in, or reset your password at ${origin}/forgot-password if you have lost it.`,
+      html: mailLayout({
+        heading: 'You already have an account',
+        paragraphs: [
+          `Someone (perhaps you) tried to sign up to Pourscope with ${existing.email}, which already has an account.`,
+          'If you have lost your password, you can set a new one.',
+        ],
+        action: { label: 'Sign in', url: `${origin}/sign-in` },
+      }),
+    }).catch((err: unknown) => logger.warn({ err }, 'sign-up notice not sent'));
+    return { status: 'check-email' };
+  }
+  try {
+    const user = await createAccount(input);
+    return { userId: user.id };
+  } catch (err) {
+    // Two sign-ups for one address at the same moment: the loser gets the same answer.
+    if ((err as { name?: string }).name === 'SequelizeUniqueConstraintError') return { status: 'check-email' };
+    throw err;
+  }
+}
+
+/** Checks the password; throws the same 401 for an unknown e-mail and a wrong password. */
+export async function verifyCredentials(input: SignInInput, address: string): Promise<string> {
+  await limiter.assertMaySignIn(input.email, address);
+  const user = await users.findByEmail(input.email);
+  const ok = user ? await verifyPassword(input.password, user.passwordHash) : await burnPasswordCheck(input.password);
+  if (!user || !ok) {
+    await limiter.recordFailure(input.email, address);
+    throw new AppError('invalid-credentials', 'That e-mail and password do not match an account', 401);
+  }
+  await limiter.recordSuccess(input.email);
+  return user.id;
+}
+
+export async function updatePreferences(userId: string, input: PreferencesUpdate): Promise<CurrentUser> {
+  await users.update(userId, input);
+  const user = await currentUser(userId);
+  if (!user) throw new AppError('not-signed-in', 'Sign in to continue', 401);
+  return user;
+}
+
+/** Mails a single-use reset link when the address has an account; silent otherwise. */
+export async function requestPasswordReset(email: string, address: string): Promise<void> {
+  await limiter.consumeMailRequest(`reset:${email}`, `reset-ip:${address}`);
+  const user = await users.findByEmail(email);
+  if (!user) return;
+  const token = newLinkToken();
+  await resetTokens.create(user.id, hashToken(token), new Date(Date.now() + PASSWORD_RESET_LIFETIME_MS));
+  const url = `${config().http.origin}/reset-password?token=${token}`;
+  await sendMail({
+    to: user.email,
+    subject: 'Set a new Pourscope password',
+    text: `Hello ${user.displayName},\n\nOpen this link within an hour to set a new password:\n${url}\n\nThe link works once. If you did not ask for it, ignore this mail; your password stays as it is.`,
+    html: mailLayout({
+      heading: 'Set a new password',
+      paragraphs: [
+        `Hello ${user.displayName},`,
+        'Open the link below within an hour to set a new password. It works once.',
+        'If you did not ask for this, ignore the mail; your password stays as it is.',
+      ],
+      action: { label: 'Set a new password', url },
+    }),
+  });
+}
+
+/** Uses the token once, sets the password and ends every session of the account. */
+export async function confirmPasswordReset(input: PasswordResetConfirm): Promise<void> {
+  const passwordHash = await hashPassword(input.password, config().auth.bcryptCost);
+  await withTransaction(async (tx) => {
+    const userId = await resetTokens.consume(hashToken(input.token), tx);
+    if (!userId) {
+      throw new AppError('token-invalid', 'This link has expired or was already used. Ask for a new one.', 400);
+    }
+    await users.setPasswordHash(userId, passwordHash, tx);
+    await users.endSessions(userId, undefined, tx);
+  });
+}

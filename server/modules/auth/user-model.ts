@@ -1,0 +1,37 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+} from 'sequelize';
+import { sequelize } from '../../db/sequelize.ts';
+
+export class UserModel extends Model<InferAttributes<UserModel>, InferCreationAttributes<UserModel>> {
+  declare id: CreationOptional<string>;
+  declare email: string;
+  declare passwordHash: string;
+  declare displayName: string;
+  declare temperatureUnit: CreationOptional<'C' | 'F'>;
+  declare massUnit: CreationOptional<'g' | 'oz'>;
+  declare theme: CreationOptional<'system' | 'light' | 'dark'>;
+  declare passwordChangedAt: CreationOptional<Date>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+UserModel.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+    passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+    displayName: { type: DataTypes.STRING(80), allowNull: false },
+    temperatureUnit: { type: DataTypes.STRING(1), allowNull: false, defaultValue: 'C' },
+    massUnit: { type: DataTypes.STRING(2), allowNull: false, defaultValue: 'g' },
+    theme: { type: DataTypes.STRING(6), allowNull: false, defaultValue: 'system' },
+    passwordChangedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, modelName: 'User', tableName: 'users' },
+);
