@@ -10,12 +10,10 @@ import { pgPool } from './db/sequelize.ts';
 import { csrfProtection } from './middleware/csrf.ts';
 import { apiNotFound, errorHandler } from './middleware/error-handler.ts';
 import { requestId } from './middleware/request-id.ts';
-import { authRouter } from './modules/auth/auth-router.ts';
+import { API_ROUTERS } from './api-routers.ts';
 import { SESSION_COOKIE } from './modules/auth/session-cookie.ts';
 import { devRouter } from './modules/dev/dev-router.ts';
 import { healthRouter } from './modules/health/health-router.ts';
-import { invitationsRouter } from './modules/invitations/invitations-router.ts';
-import { workshopsRouter } from './modules/workshops/workshops-router.ts';
 
 const DIST_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../dist');
 
@@ -90,9 +88,7 @@ export function createApp(): AppHandle {
   });
   api.use(healthRouter);
   api.use(csrfProtection);
-  api.use(authRouter);
-  api.use(workshopsRouter);
-  api.use(invitationsRouter);
+  for (const router of API_ROUTERS) api.use(router);
   if (!cfg.production) api.use(devRouter);
   api.use(apiNotFound);
   app.use('/api', api);

@@ -12,7 +12,9 @@ export type Entity =
   | 'report'
   | 'comment'
   | 'rule';
-export type Permission = `${Action}:${Entity}:${'own' | 'any'}`;
+/** own: the actor's own; mentee: owned by a student the actor mentors; any: anyone's in the workshop. */
+export type Access = 'own' | 'mentee' | 'any';
+export type Permission = `${Action}:${Entity}:${Access}`;
 
 // Students and casters log their own work; mentors read and review; admins run
 // the workshop. "own" grants need the resource's owner to be the actor.
@@ -42,7 +44,7 @@ const GRANTS = {
     'read:workshop:any',
     'read:member:any',
     'create:heat:own',
-    'read:heat:any',
+    'read:heat:own',
     'update:heat:own',
     'delete:heat:own',
     'read:equipment:any',
@@ -65,14 +67,19 @@ const GRANTS = {
   mentor: [
     'read:workshop:any',
     'read:member:any',
-    'read:heat:any',
+    'create:heat:own',
+    'read:heat:own',
+    'update:heat:own',
+    'delete:heat:own',
+    'read:heat:mentee',
     'read:equipment:any',
     'read:photo:any',
     'create:mark:own',
     'update:mark:any',
     'delete:mark:any',
-    'read:report:any',
-    'update:report:any',
+    'read:report:own',
+    'read:report:mentee',
+    'update:report:mentee',
     'create:comment:own',
     'update:comment:own',
     'delete:comment:own',
@@ -110,20 +117,27 @@ const GRANTS = {
   ],
 } as const satisfies Record<Role, readonly Permission[]>;
 
+/** What a check needs to know about the resource: whose it is and who mentors them. */
+export type ResourceOwner = { ownerId: string; ownerMentorIds?: readonly string[] };
+
 /**
  * Whether `actor` may perform `action` on `entity`.
  * "any" grants always apply. "own" grants apply to `create` (you create your
- * own) and to every other action only when `resource.ownerId` is the actor,
- * so a check that forgets the resource fails closed.
+ * own) and to every other action only when `resource.ownerId` is the actor;
+ * "mentee" grants only when the actor is among the owner's mentors. A check
+ * that forgets the resource therefore fails closed.
  */
-export function can(
-  actor: Actor,
-  action: Action,
-  entity: Entity,
-  resource?: { ownerId: string },
-): boolean {
+export function can(actor: Actor, action: Action, entity: Entity, resource?: ResourceOwner): boolean {
   const granted: readonly Permission[] = GRANTS[actor.role];
   if (granted.includes(`${action}:${entity}:any`)) return true;
   const ownsIt = action === 'create' || resource?.ownerId === actor.id;
-  return ownsIt && granted.includes(`${action}:${entity}:own`);
+  if (ownsIt && granted.includes(`${action}:${entity}:own`)) return true;
+  const mentorsOwner = resource?.ownerMentorIds?.includes(actor.id) ?? false;
+  return mentorsOwner && granted.includes(`${action}:${entity}:mentee`);
+}
+
+/** The widest access a role has for an action on an entity, for building list filters. */
+export function accessFor(actor: Actor, action: Action, entity: Entity): Access[] {
+  const granted: readonly Permission[] = GRANTS[actor.role];
+  return (['any', 'own', 'mentee'] as const).filter((a) => granted.includes(`${action}:${entity}:${a}`));
 }
