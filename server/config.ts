@@ -26,6 +26,10 @@ const envSchema = z.object({
   SESSION_MAX_AGE_HOURS: z.coerce.number().positive().default(24 * 14),
   COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
   TRUST_PROXY: z.string().default('loopback'),
+  UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).default(25 * 1024 * 1024),
+  UPLOAD_MAX_FILES: z.coerce.number().int().min(1).max(100).default(20),
+  // 100 MP covers every phone and most cameras; a decompression bomb has far more.
+  IMAGE_MAX_PIXELS: z.coerce.number().int().min(1_000_000).default(100_000_000),
   BCRYPT_COST: z.coerce.number().int().min(12).max(15).default(12),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
@@ -70,6 +74,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
       secureCookie: e.COOKIE_SECURE === 'auto' ? ('auto' as const) : e.COOKIE_SECURE === 'true',
     },
     auth: { bcryptCost: e.BCRYPT_COST },
+    uploads: { maxBytes: e.UPLOAD_MAX_BYTES, maxFiles: e.UPLOAD_MAX_FILES, maxPixels: e.IMAGE_MAX_PIXELS },
     log: { level: e.LOG_LEVEL },
   });
 }

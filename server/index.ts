@@ -4,6 +4,7 @@ import { createApp } from './app.ts';
 import { closeDatabase, sequelize } from './db/sequelize.ts';
 import { logger } from './lib/logger.ts';
 import { closeMailer } from './lib/mailer.ts';
+import { drainObjectDeletions } from './modules/photos/photos-service.ts';
 
 /** Starts the HTTP server; resolves once it listens. */
 export async function startServer(): Promise<{ server: Server; stop: () => Promise<void> }> {
@@ -19,9 +20,15 @@ export async function startServer(): Promise<{ server: Server; stop: () => Promi
   const port = typeof address === 'object' && address ? address.port : cfg.http.port;
   logger.info({ port }, `Pourscope is serving on http://${cfg.http.host}:${port}`);
 
+  // Objects of deleted photos are removed from the store in the background,
+  // and retried while the store is away.
+  const sweeper = setInterval(() => void drainObjectDeletions().catch(() => {}), 60_000);
+  sweeper.unref();
+
   let stopping: Promise<void> | undefined;
   const stop = () => {
     // Finish requests in flight, then close the pools.
+    clearInterval(sweeper);
     stopping ??= new Promise<void>((resolve) => {
       server.close(() => resolve());
       server.closeIdleConnections();
