@@ -1,0 +1,69 @@
+/**
+ * Every client path, in one typed registry. Route definitions use `path`;
+ * links and redirects use `getHref(...)`, so a path is spelled once.
+ */
+
+const withNext = (base: string, next?: string) =>
+  next && next !== '/' ? `${base}?next=${encodeURIComponent(next)}` : base;
+
+const inWorkshop = (segment: string) => ({
+  path: `/w/:workshopId/${segment}`,
+  getHref: (workshopId: string) => `/w/${encodeURIComponent(workshopId)}/${segment}`,
+});
+
+export const paths = {
+  home: { path: '/', getHref: () => '/' },
+
+  signIn: { path: '/sign-in', getHref: (next?: string) => withNext('/sign-in', next) },
+  signUp: { path: '/sign-up', getHref: (next?: string) => withNext('/sign-up', next) },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  resetPassword: {
+    path: '/reset-password',
+    getHref: (token?: string) =>
+      token ? `/reset-password?token=${encodeURIComponent(token)}` : '/reset-password',
+  },
+  invitation: {
+    path: '/invitations/:token',
+    getHref: (token: string) => `/invitations/${encodeURIComponent(token)}`,
+  },
+
+  createWorkshop: { path: '/workshops/new', getHref: () => '/workshops/new' },
+  settings: { path: '/settings', getHref: () => '/settings' },
+  safety: {
+    path: '/safety',
+    getHref: (section?: string) => (section ? `/safety#${section}` : '/safety'),
+  },
+  devMail: { path: '/dev/mail', getHref: () => '/dev/mail' },
+
+  workshop: {
+    path: '/w/:workshopId',
+    getHref: (workshopId: string) => `/w/${encodeURIComponent(workshopId)}`,
+  },
+  heats: inWorkshop('heats'),
+  gallery: inWorkshop('gallery'),
+  reports: inWorkshop('reports'),
+  guide: inWorkshop('guide'),
+  equipment: inWorkshop('equipment'),
+  calculators: inWorkshop('calculators'),
+  insights: inWorkshop('insights'),
+  heatTreatment: inWorkshop('heat-treatment'),
+  members: inWorkshop('members'),
+} as const;
+
+/**
+ * A `next` value from the query string, made safe to navigate to: only a path
+ * on this site (starts with one slash), never another origin.
+ */
+export function safeNextPath(next: string | null | undefined, fallback = '/'): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) {
+    return fallback;
+  }
+  return next;
+}
+
+/** The same section of another workshop, e.g. /w/a/gallery → /w/b/gallery. */
+export function switchWorkshopPath(pathname: string, workshopId: string): string {
+  const match = /^\/w\/[^/]+(\/[^?#]*)?/.exec(pathname);
+  const rest = match?.[1] && match[1] !== '/' ? match[1] : '/heats';
+  return `/w/${encodeURIComponent(workshopId)}${rest}`;
+}
