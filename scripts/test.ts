@@ -6,17 +6,19 @@
 //   npm test                 everything
 //   npm test -- vitest ARGS  only vitest, ARGS passed on (e.g. --project unit)
 //   npm test -- e2e ARGS     only the browser tests
+//   npm test -- typecheck    only tsc
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
 import { freePort } from './services/free-port.ts';
-import { PLAYWRIGHT, runNode, spawnNode, TSX, VITE, VITEST } from './services/run-node.ts';
+import { PLAYWRIGHT, runNode, spawnNode, TSC, TSX, VITE, VITEST } from './services/run-node.ts';
 import { startStack } from './services/stack.ts';
 
 const [mode = 'all', ...passThrough] = process.argv.slice(2);
 const runVitest = mode === 'all' || mode === 'vitest';
 const runE2e = mode === 'all' || mode === 'e2e';
+const runTypecheck = mode === 'all' || mode === 'typecheck';
 const root = mkdtempSync(path.join(tmpdir(), 'pourscope-test-'));
 const log = (line: string) => console.log(`› ${line}`);
 
@@ -34,6 +36,12 @@ let server: ReturnType<typeof spawnNode> | undefined;
 let exitCode = 0;
 
 try {
+  if (runTypecheck) {
+    log('type-checking');
+    const code = await runNode(TSC, ['--noEmit', '-p', 'tsconfig.json']);
+    tallies.push({ suite: 'typecheck', passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0, ran: true });
+  }
+
   if (runVitest) {
     if ((await runNode(TSX, ['scripts/prepare-database.ts', '--no-seed'], { env: baseEnv })) !== 0) {
       throw new Error('migrating the test database failed');

@@ -22,6 +22,7 @@ export function spawnNode(
 }
 
 export const TSX = 'node_modules/tsx/dist/cli.mjs';
+export const TSC = 'node_modules/typescript/bin/tsc';
 export const VITE = 'node_modules/vite/bin/vite.js';
 export const VITEST = 'node_modules/vitest/vitest.mjs';
 export const PLAYWRIGHT = 'node_modules/@playwright/test/cli.js';
