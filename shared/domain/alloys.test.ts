@@ -95,7 +95,7 @@ describe('alloy values against their sources', () => {
     ['Pure Al', 660.323],
     ['Pure Zn', 419.527],
     ['Pure Sn', 231.928],
-  ] as const)('when %s is looked up, then it melts at the ITS-90 freezing point %d °C', (d, point) => {
+  ] as const)('when %s is looked up, then it melts at the ITS-90 freezing point %d °C (value from memory)', (d, point) => {
     const a = alloy(d);
     expect(a.solidusC).toBe(point);
     expect(a.liquidusC).toBe(point);

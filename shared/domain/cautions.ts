@@ -57,7 +57,8 @@ export function cautionsFor(
       source: `${PUBLICATIONS.saltFluxReview2023}; borax in the copper-alloy and brazing literature (from memory)`,
     });
   }
-  if (c.fluxed === true && alloy?.traits.includes('high_magnesium')) {
+  const usedFlux = c.fluxed === true || (c.fluxed === undefined && c.fluxKind !== undefined);
+  if (usedFlux && alloy?.traits.includes('high_magnesium')) {
     cautions.push({
       id: 'sodium_flux_high_magnesium',
       title: 'Use a sodium-free flux on this alloy',

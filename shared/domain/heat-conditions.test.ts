@@ -37,6 +37,7 @@ const full = {
 describe('heatConditionsSchema', () => {
   test('when a complete heat is parsed, then it passes and every field has a label', () => {
     expect(heatConditionsSchema.parse(full)).toEqual(full);
+    expect(heatConditionsInputSchema.parse(full)).toEqual(full);
     expect(Object.keys(HEAT_CONDITION_LABELS).sort()).toEqual([...HEAT_CONDITION_FIELDS].sort());
     expect(HEAT_CONDITION_FIELDS).toHaveLength(20);
   });
@@ -52,8 +53,9 @@ describe('heatConditionsSchema', () => {
     expect(heatConditionsSchema.safeParse({ ...full, ...patch }).success).toBe(false);
   });
 
-  test('when a partial heat is parsed with the input schema, then missing fields are fine', () => {
+  test('when a partial heat log is parsed, then missing fields are fine unless a complete record is asked for', () => {
     expect(heatConditionsInputSchema.parse({ pourTempC: 700 })).toEqual({ pourTempC: 700 });
+    expect(heatConditionsInputSchema.safeParse({ relativeHumidityPct: 150 }).success).toBe(false);
     expect(heatConditionsSchema.safeParse({ pourTempC: 700 }).success).toBe(false);
   });
 });

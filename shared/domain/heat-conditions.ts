@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import type { MouldKind } from './alloys.ts';
 
-// What a caster records about one heat and its pour. Every field is optional
-// in practice (diagnose takes a Partial), but the full type keeps the field
-// names in one place for `missing` lists and form labels.
+// What a caster records about one heat and its pour. A real heat log is
+// always partial (diagnose takes a Partial and heat logs parse with the input
+// schema); the full type keeps the field names in one place for `missing`
+// lists and form labels.
 
 export const CHARGE_KINDS = ['ingot', 'clean_scrap', 'dirty_scrap'] as const;
 export type ChargeKind = (typeof CHARGE_KINDS)[number];
@@ -33,6 +34,7 @@ export function mouldKindOf(material: MoldMaterial): MouldKind {
   return isMetalMold(material) ? 'permanentMould' : 'sand';
 }
 
+/** Every field required, each within sensible bounds (no 120 % humidity, no 5000 °C pour). */
 export const heatConditionsSchema = z.object({
   pourTempC: z.number().min(0).max(1800),
   /** Hottest the melt got in the furnace. */
@@ -65,7 +67,7 @@ export const heatConditionsSchema = z.object({
 export type HeatConditions = z.infer<typeof heatConditionsSchema>;
 export type HeatConditionField = keyof HeatConditions;
 
-/** What a heat log or `diagnose` accepts: any subset of the fields. */
+/** A heat log as recorded, and what `diagnose` accepts: any subset of the fields, same bounds. */
 export const heatConditionsInputSchema = heatConditionsSchema.partial();
 
 /** Field names in form order; `missing` lists follow it. */

@@ -16,7 +16,7 @@ describe('hydrogenSolubility', () => {
     [700, 'solid', 0.0447],
     [750, 'solid', 0.0569],
     [800, 'solid', 0.0708],
-  ] as const)('when aluminium is at %d °C (%s, 1 atm H₂), then Ransley & Neufeld give %d mL/100 g', (tempC, phase, s) => {
+  ] as const)('when aluminium is at %d °C (%s, 1 atm H₂), then Ransley & Neufeld (constants from memory) give %d mL/100 g', (tempC, phase, s) => {
     expect(hydrogenSolubility({ tempC, phase })).toBeCloseTo(s, phase === 'liquid' ? 3 : 4);
   });
 

@@ -1,5 +1,6 @@
 import { PUBLICATIONS } from '../sources.ts';
 import type { DefectKindId } from '../defect-kinds.ts';
+import { SAND_MOLD_MATERIALS } from '../heat-conditions.ts';
 import type { Condition, Rule } from './rule-schemas.ts';
 
 // The shipped rule set. Weights rank likely causes; they are heuristics, not
@@ -14,7 +15,7 @@ const heuristic = (what: string) => `${what}: app heuristic`;
 const aluminium: Condition = { field: 'alloyFamily', op: 'in', value: ['aluminium'] };
 const aluminiumOrCopper: Condition = { field: 'alloyFamily', op: 'in', value: ['aluminium', 'copper'] };
 const metalMould: Condition = { field: 'moldIsMetal', op: 'eq', value: true };
-const sandMould: Condition = { field: 'moldMaterial', op: 'in', value: ['green_sand', 'bonded_sand'] };
+const sandMould: Condition = { field: 'moldMaterial', op: 'in', value: [...SAND_MOLD_MATERIALS] };
 const expendableMould: Condition = {
   field: 'moldMaterial',
   op: 'in',
@@ -351,16 +352,11 @@ export const DEFAULT_RULES: readonly Rule[] = Object.freeze([
     id: 'cool-metal-mould-fill',
     defects: FILL,
     appliesWhen: metalMould,
-    when: {
-      all: [
-        { field: 'moldTempC', op: 'lt', value: 300 },
-        { field: 'moldTempC', op: 'gte', value: 150 },
-      ],
-    },
+    when: { field: 'moldTempC', op: 'lt', value: 300 },
     variable: 'mold_temperature',
     weight: 0.4,
     evidence: 'the {moldMaterial} mould at {moldTempC} was below the usual running range (from {threshold}); permanent moulds for aluminium run at about 300–450 °C',
-    normalEvidence: 'the {moldMaterial} mould at {moldTempC} was within or above the usual running range',
+    normalEvidence: 'the {moldMaterial} mould at {moldTempC} was within or above the usual running range (from {threshold})',
     fixes: ['Bring the mould up to about 300 °C for thin or detailed work.'],
     source: 'permanent-mould running temperatures of about 300–450 °C for aluminium, from memory of ASM Handbook Vol. 15, "Permanent Mold Casting of Aluminum Alloys"',
   },

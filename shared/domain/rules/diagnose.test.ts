@@ -5,7 +5,7 @@ import { DomainInputError } from '../errors.ts';
 import type { HeatConditions } from '../heat-conditions.ts';
 import type { MeltVariableId } from '../melt-variables.ts';
 import { DEFAULT_RULES } from './default-rules.ts';
-import { diagnose } from './diagnose.ts';
+import { diagnose, diagnoseInputSchema } from './diagnose.ts';
 import type { Cause, DiagnoseInput } from './diagnose.ts';
 import type { Rule } from './rule-schemas.ts';
 
@@ -294,6 +294,15 @@ describe('diagnose: options and edges', () => {
       { includeNormal: false },
     );
     expect(causes.some((c) => c.status === 'normal')).toBe(false);
+  });
+
+  test('when a request body is parsed with diagnoseInputSchema, then it feeds diagnose directly', () => {
+    const body = JSON.parse(
+      JSON.stringify({ alloy: a356, defects: [{ kind: 'gas_porosity', severity: 2 }], conditions: { degassed: false } }),
+    );
+    const parsed = diagnoseInputSchema.parse(body);
+    expect(diagnose(parsed).causes[0].variable).toBe('degassing');
+    expect(diagnoseInputSchema.safeParse({ ...body, defects: [{ kind: 'gas_porosity', severity: 4 }] }).success).toBe(false);
   });
 
   test('when no defect is tagged, then there are no causes but cautions still show', () => {

@@ -28,7 +28,7 @@ export type DecidingComparison = { field: ConditionField; value: number; thresho
 export type Evaluation = {
   /** undefined: not decidable with the data given. */
   outcome: boolean | undefined;
-  missing: HeatConditionField[];
+  missing: readonly HeatConditionField[];
   missingAlloy: boolean;
   deciding?: DecidingComparison;
 };
@@ -82,7 +82,7 @@ export function buildContext(conditions: Partial<HeatConditions>, alloy?: Alloy)
   return { values, alloy, pour };
 }
 
-const UNDECIDED_NO_DATA: Evaluation = { outcome: undefined, missing: [], missingAlloy: true };
+const UNDECIDED_NO_DATA: Evaluation = Object.freeze({ outcome: undefined, missing: Object.freeze([]), missingAlloy: true });
 
 function resolveThreshold(value: AlloyThreshold, ctx: EvaluationContext): number | undefined {
   const { alloy, pour } = ctx;
