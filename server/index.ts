@@ -3,6 +3,8 @@ import { config } from './config.ts';
 import { createApp } from './app.ts';
 import { closeDatabase, sequelize } from './db/sequelize.ts';
 import { logger } from './lib/logger.ts';
+import { startJobs, stopJobs } from './lib/jobs.ts';
+import './lib/mail-queue.ts';
 import { closeMailer } from './lib/mailer.ts';
 import { drainObjectDeletions } from './modules/photos/photos-service.ts';
 
@@ -10,6 +12,7 @@ import { drainObjectDeletions } from './modules/photos/photos-service.ts';
 export async function startServer(): Promise<{ server: Server; stop: () => Promise<void> }> {
   const cfg = config();
   await sequelize.authenticate();
+  await startJobs({ work: true });
   const handle = createApp();
   const server = await new Promise<Server>((resolve, reject) => {
     const s = handle.app.listen(cfg.http.port, cfg.http.host, () => resolve(s));
@@ -35,6 +38,7 @@ export async function startServer(): Promise<{ server: Server; stop: () => Promi
       setTimeout(() => server.closeAllConnections(), 4_000).unref();
     }).then(async () => {
       await handle.close();
+      await stopJobs();
       closeMailer();
       await closeDatabase();
     });

@@ -1,7 +1,7 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import { config } from '../config.ts';
 
-export type OutgoingMail = { to: string; subject: string; text: string; html: string };
+export type OutgoingMail = { to: string; subject: string; text: string; html: string; messageId?: string };
 
 // One transport per process, pooled; SMTP_URL names a real provider in
 // production and the local mail fake in development and tests.

@@ -26,3 +26,8 @@ export function linkIn(mail: StoredMail, prefix: string): string {
   if (!url) throw new Error(`no ${prefix} link in mail "${mail.subject}"`);
   return url;
 }
+
+/** The proxy in front of the mail fake, started by tests/setup/api-setup.ts. */
+export function mailProxy(): import('./tcp-proxy.ts').TcpProxy {
+  return (globalThis as { mailProxy?: import('./tcp-proxy.ts').TcpProxy }).mailProxy!;
+}

@@ -7,8 +7,8 @@ import type {
 import { config } from '../../config.ts';
 import { withTransaction, type Tx } from '../../db/sequelize.ts';
 import { AppError } from '../../lib/app-error.ts';
-import { logger } from '../../lib/logger.ts';
-import { mailLayout, sendMail } from '../../lib/mailer.ts';
+import { mailLayout } from '../../lib/mailer.ts';
+import { queueMail } from '../../lib/mail-queue.ts';
 import { burnPasswordCheck, hashPassword, verifyPassword } from '../../lib/password.ts';
 import { hashToken, newLinkToken } from '../../lib/tokens.ts';
 import * as workshopsService from '../workshops/workshops-service.ts';
@@ -58,7 +58,7 @@ export async function signUp(
   if (existing) {
     await limiter.consumeMailRequest(`sign-up:${input.email}`, `sign-up-ip:${address}`);
     const origin = config().http.origin;
-    await sendMail({
+    await queueMail({
       to: existing.email,
       subject: 'Someone tried to open a Pourscope account with your address',
       text: `An account for ${existing.email} already exists. Sign in at ${origin}/sign-in, or reset your password at ${origin}/forgot-password if you have lost it.`,
@@ -70,7 +70,7 @@ export async function signUp(
         ],
         action: { label: 'Sign in', url: `${origin}/sign-in` },
       }),
-    }).catch((err: unknown) => logger.warn({ err }, 'sign-up notice not sent'));
+    });
     return { status: 'check-email' };
   }
   try {
@@ -111,7 +111,7 @@ export async function requestPasswordReset(email: string, address: string): Prom
   const token = newLinkToken();
   await resetTokens.create(user.id, hashToken(token), new Date(Date.now() + PASSWORD_RESET_LIFETIME_MS));
   const url = `${config().http.origin}/reset-password?token=${token}`;
-  await sendMail({
+  await queueMail({
     to: user.email,
     subject: 'Set a new Pourscope password',
     text: `Hello ${user.displayName},\n\nOpen this link within an hour to set a new password:\n${url}\n\nThe link works once. If you did not ask for it, ignore this mail; your password stays as it is.`,

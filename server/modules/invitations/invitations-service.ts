@@ -9,7 +9,8 @@ import type {
 import { config } from '../../config.ts';
 import { withTransaction } from '../../db/sequelize.ts';
 import { AppError, forbidden } from '../../lib/app-error.ts';
-import { mailLayout, sendMail } from '../../lib/mailer.ts';
+import { mailLayout } from '../../lib/mailer.ts';
+import { queueMail } from '../../lib/mail-queue.ts';
 import { hashToken, newLinkToken } from '../../lib/tokens.ts';
 import * as authService from '../auth/auth-service.ts';
 import * as workshopsService from '../workshops/workshops-service.ts';
@@ -25,7 +26,7 @@ export async function listInvitations(actor: Actor, workshopId: string): Promise
   return repo.list(workshopId);
 }
 
-/** Stores the invitation, then mails its link; a mail failure undoes nothing but is reported. */
+/** Stores the invitation and queues the mail with its link. */
 export async function invite(actor: Actor, workshopId: string, input: InvitationCreateInput): Promise<Invitation> {
   if (!can(actor, 'manage', 'invitation')) throw forbidden('Only the workshop’s admins invite people');
   const token = newLinkToken();
@@ -40,20 +41,16 @@ export async function invite(actor: Actor, workshopId: string, input: Invitation
   const workshop = (await workshopsService.workshopName(workshopId)) ?? 'a workshop';
   const url = `${config().http.origin}/invitations/${token}`;
   const role = ROLE_LABELS[input.role].toLowerCase();
-  try {
-    await sendMail({
-      to: input.email,
-      subject: `You are invited to ${workshop} on Pourscope`,
-      text: `You have been invited to join ${workshop} as a ${role}.\n\nAccept within 7 days: ${url}\n\nThe link works once.`,
-      html: mailLayout({
-        heading: `Join ${workshop}`,
-        paragraphs: [`You have been invited to join ${workshop} on Pourscope as a ${role}.`, 'The link works once and expires in 7 days.'],
-        action: { label: 'Accept the invitation', url },
-      }),
-    });
-  } catch (cause) {
-    throw new AppError('mail-unavailable', 'The invitation is saved but its mail could not be sent; try again shortly', 503, { cause });
-  }
+  await queueMail({
+    to: input.email,
+    subject: `You are invited to ${workshop} on Pourscope`,
+    text: `You have been invited to join ${workshop} as a ${role}.\n\nAccept within 7 days: ${url}\n\nThe link works once.`,
+    html: mailLayout({
+      heading: `Join ${workshop}`,
+      paragraphs: [`You have been invited to join ${workshop} on Pourscope as a ${role}.`, 'The link works once and expires in 7 days.'],
+      action: { label: 'Accept the invitation', url },
+    }),
+  });
   return (await repo.list(workshopId)).find((i) => i.id === id)!;
 }
 
