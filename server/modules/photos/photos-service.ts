@@ -99,19 +99,15 @@ async function storeOne(actor: Actor, workshopId: string, castingId: string, fil
 
   const photoId = randomUUID();
   const placed = image.variants.map((v) => ({ ...v, key: objectKey(workshopId, photoId, v.kind, v.extension) }));
-  const stored: string[] = [];
-  try {
-    await Promise.all(
-      placed.map(async (v) => {
-        await putObject(v.key, v.body, v.contentType);
-        stored.push(v.key);
-      }),
-    );
-  } catch (error) {
-    // The store failed part-way: undo what landed, now or later.
-    const left = await deleteObjects(stored);
+  // Wait for every PUT to settle, not just the first failure: a PUT still in
+  // flight when another fails may yet land. Even a failed PUT may have landed
+  // (the answer was lost), so every key is undone, now or by the worker later.
+  const puts = await Promise.allSettled(placed.map((v) => putObject(v.key, v.body, v.contentType)));
+  const failure = puts.find((p) => p.status === 'rejected');
+  if (failure) {
+    const left = await deleteObjects(placed.map((v) => v.key));
     await queueForDeletion(left);
-    throw error;
+    throw failure.reason;
   }
 
   const variants = Object.fromEntries(
