@@ -13,7 +13,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           environment: 'node',
-          include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts'],
+          include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts', 'seeders/**/*.test.ts'],
         },
       },
       {
