@@ -97,28 +97,41 @@ export async function findPhoto(workshopId: string, photoId: string): Promise<Ph
   return rows[0] ?? null;
 }
 
-/** Newest first; the cursor is the last row's (created_at, id). */
+/**
+ * The gallery list's SQL with positional parameters, newest first; the
+ * cursor is the last row's (created_at, id). Exported so the benchmark's bare
+ * floor server runs exactly the same statement.
+ */
+export function listPhotosQuery(
+  workshopId: string,
+  q: PhotoListQuery,
+  after: { createdAt: string; id: string } | null,
+): { sql: string; bind: unknown[] } {
+  const bind: unknown[] = [workshopId];
+  const param = (v: unknown) => {
+    bind.push(v);
+    return `$${bind.length}`;
+  };
+  const where = ['p.workshop_id = $1'];
+  if (q.kind) where.push(`EXISTS (SELECT 1 FROM marks m WHERE m.photo_id = p.id AND m.defect_kind = ${param(q.kind)})`);
+  if (q.alloy) where.push(`lower(h.alloy) = lower(${param(q.alloy)})`);
+  if (q.mouldMaterial) where.push(`mo.material = ${param(q.mouldMaterial)}`);
+  if (q.casterId) where.push(`h.caster_id = ${param(q.casterId)}`);
+  if (q.castingId) where.push(`p.casting_id = ${param(q.castingId)}`);
+  if (q.from) where.push(`p.created_at >= ${param(q.from)}::date`);
+  if (q.to) where.push(`p.created_at < (${param(q.to)}::date + interval '1 day')`);
+  if (after) where.push(`(p.created_at, p.id) < (${param(after.createdAt)}::timestamptz, ${param(after.id)}::uuid)`);
+  const sql = `SELECT ${PHOTO_COLUMNS} ${PHOTO_FROM} WHERE ${where.join(' AND ')} ORDER BY p.created_at DESC, p.id DESC LIMIT ${param(q.limit)}`;
+  return { sql, bind };
+}
+
 export async function listPhotos(
   workshopId: string,
   q: PhotoListQuery,
   after: { createdAt: string; id: string } | null,
 ): Promise<PhotoRow[]> {
-  const where = ['p.workshop_id = :workshopId'];
-  if (q.kind) where.push('EXISTS (SELECT 1 FROM marks m WHERE m.photo_id = p.id AND m.defect_kind = :kind)');
-  if (q.alloy) where.push('lower(h.alloy) = lower(:alloy)');
-  if (q.mouldMaterial) where.push('mo.material = :mouldMaterial');
-  if (q.casterId) where.push('h.caster_id = :casterId');
-  if (q.castingId) where.push('p.casting_id = :castingId');
-  if (q.from) where.push('p.created_at >= :from::date');
-  if (q.to) where.push("p.created_at < (:to::date + interval '1 day')");
-  if (after) where.push('(p.created_at, p.id) < (:afterCreatedAt::timestamptz, :afterId::uuid)');
-  return sequelize.query<PhotoRow>(
-    `SELECT ${PHOTO_COLUMNS} ${PHOTO_FROM} WHERE ${where.join(' AND ')} ORDER BY p.created_at DESC, p.id DESC LIMIT :limit`,
-    {
-      replacements: { workshopId, ...q, afterCreatedAt: after?.createdAt ?? null, afterId: after?.id ?? null, limit: q.limit },
-      type: QueryTypes.SELECT,
-    },
-  );
+  const { sql, bind } = listPhotosQuery(workshopId, q, after);
+  return sequelize.query<PhotoRow>(sql, { bind, type: QueryTypes.SELECT });
 }
 
 export async function updatePhoto(workshopId: string, photoId: string, values: { title?: string | null; notes?: string | null }) {
@@ -152,14 +165,14 @@ const MARK_COLUMNS = `m.id, m.photo_id AS "photoId", m.author_id AS "authorId", 
 
 const markOut = (r: MarkRow): Mark => ({ ...r, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString() });
 
+/** The marks of a page of photos, oldest first; positional, for the benchmark floor too. */
+export const MARKS_OF_SQL = `SELECT ${MARK_COLUMNS} FROM marks m LEFT JOIN users u ON u.id = m.author_id
+  WHERE m.photo_id = ANY($1::uuid[]) ORDER BY m.created_at, m.id`;
+
 export async function marksOf(photoIds: string[]): Promise<Map<string, Mark[]>> {
   const byPhoto = new Map<string, Mark[]>(photoIds.map((id) => [id, []]));
   if (!photoIds.length) return byPhoto;
-  const rows = await sequelize.query<MarkRow>(
-    `SELECT ${MARK_COLUMNS} FROM marks m LEFT JOIN users u ON u.id = m.author_id
-      WHERE m.photo_id IN (:photoIds) ORDER BY m.created_at, m.id`,
-    { replacements: { photoIds }, type: QueryTypes.SELECT },
-  );
+  const rows = await sequelize.query<MarkRow>(MARKS_OF_SQL, { bind: [photoIds], type: QueryTypes.SELECT });
   for (const r of rows) byPhoto.get(r.photoId)!.push(markOut(r));
   return byPhoto;
 }
