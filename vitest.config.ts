@@ -37,6 +37,7 @@ export default defineConfig({
           environment: 'happy-dom',
           include: ['src/**/*.test.{ts,tsx}'],
           setupFiles: ['src/testing/setup-tests.ts'],
+          testTimeout: 20_000,
         },
       },
     ],

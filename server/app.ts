@@ -72,7 +72,9 @@ export function createApp(): AppHandle {
         httpOnly: true,
         sameSite: 'lax',
         secure: cfg.session.secureCookie,
-        maxAge: cfg.session.maxAgeMs,
+        // Rolling: every answer pushes the cookie and the stored row's expiry
+        // forward by the idle timeout, so only an unused session runs out.
+        maxAge: cfg.session.idleMs,
         path: '/',
       },
     }),
@@ -80,8 +82,10 @@ export function createApp(): AppHandle {
   // A session older than its absolute lifetime is ended even if it stayed active.
   api.use((req, _res, next) => {
     const started = req.session.signedInAt;
-    if (started && Date.now() - started > cfg.session.maxAgeMs) {
-      req.session.destroy(() => next());
+    if (started && Date.now() - started > cfg.session.absoluteMs) {
+      // Regenerate rather than destroy: the stored row goes, and the request
+      // carries on with a fresh signed-out session instead of none at all.
+      req.session.regenerate((err) => next(err));
       return;
     }
     next();

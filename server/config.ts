@@ -23,7 +23,13 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(3).default('Pourscope <no-reply@pourscope.invalid>'),
   MAIL_FAKE_DIR: z.string().optional(),
   SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must have at least 32 characters'),
+  // Idle: a session unused this long ends (the rolling cookie and store expiry).
+  // Absolute: a session ends this long after sign-in however active it was.
+  SESSION_IDLE_HOURS: z.coerce.number().positive().default(12),
   SESSION_MAX_AGE_HOURS: z.coerce.number().positive().default(24 * 14),
+  // Key material for encrypting one-time-code secrets at rest; when unset the
+  // key is derived from SESSION_SECRET (see server/lib/secret-box.ts).
+  MFA_ENCRYPTION_KEY: z.string().min(32, 'MFA_ENCRYPTION_KEY must have at least 32 characters').optional(),
   COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
   TRUST_PROXY: z.string().default('loopback'),
   UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).default(25 * 1024 * 1024),
@@ -43,6 +49,11 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     throw new Error(`Pourscope cannot start; fix these settings (see .env.example):\n${lines.join('\n')}`);
   }
   const e = parsed.data;
+  if (e.SESSION_IDLE_HOURS > e.SESSION_MAX_AGE_HOURS) {
+    throw new Error(
+      'Pourscope cannot start; fix these settings (see .env.example):\n  SESSION_IDLE_HOURS: must not be longer than SESSION_MAX_AGE_HOURS',
+    );
+  }
   const production = e.NODE_ENV === 'production';
   return Object.freeze({
     env: e.NODE_ENV,
@@ -70,10 +81,11 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     },
     session: {
       secret: e.SESSION_SECRET,
-      maxAgeMs: e.SESSION_MAX_AGE_HOURS * 3600_000,
+      idleMs: e.SESSION_IDLE_HOURS * 3600_000,
+      absoluteMs: e.SESSION_MAX_AGE_HOURS * 3600_000,
       secureCookie: e.COOKIE_SECURE === 'auto' ? ('auto' as const) : e.COOKIE_SECURE === 'true',
     },
-    auth: { bcryptCost: e.BCRYPT_COST },
+    auth: { bcryptCost: e.BCRYPT_COST, mfaKeyMaterial: e.MFA_ENCRYPTION_KEY ?? e.SESSION_SECRET },
     uploads: { maxBytes: e.UPLOAD_MAX_BYTES, maxFiles: e.UPLOAD_MAX_FILES, maxPixels: e.IMAGE_MAX_PIXELS },
     log: { level: e.LOG_LEVEL },
   });

@@ -12,10 +12,23 @@ let starting: Promise<PgBoss> | undefined;
 
 type Handler = (data: unknown, job: { id: string }) => Promise<void>;
 const handlers = new Map<string, { handler: Handler; retryLimit: number }>();
+let workOptions: { pollingIntervalSeconds: number } | undefined;
 
-/** Registers a job kind; call at module load, before startJobs. */
+async function attach(b: PgBoss, name: string, handler: Handler, work: boolean) {
+  await b.createQueue(name);
+  if (!work) return;
+  await b.work(name, { pollingIntervalSeconds: workOptions?.pollingIntervalSeconds ?? 2, batchSize: 5 }, async (jobs) => {
+    for (const job of jobs) await handler(job.data, { id: job.id });
+  });
+}
+
+/**
+ * Registers a job kind, usually at module load. A kind defined after the
+ * queue started (a module imported later) gets its worker at once.
+ */
 export function defineJob<T>(name: string, handler: (data: T, job: { id: string }) => Promise<void>, opts: { retryLimit?: number } = {}) {
   handlers.set(name, { handler: handler as Handler, retryLimit: opts.retryLimit ?? 30 });
+  if (boss) void attach(boss, name, handler as Handler, workOptions !== undefined).catch((err: unknown) => logger.error({ err, name }, 'job worker not started'));
 }
 
 /**
@@ -27,14 +40,8 @@ export function startJobs(opts: { work: boolean; pollingIntervalSeconds?: number
     const b = new PgBoss({ connectionString: config().db.url, schema: 'pgboss', max: 3, application_name: 'pourscope-jobs' });
     b.on('error', (err) => logger.error({ err }, 'job queue error'));
     await b.start();
-    for (const [name, { handler }] of handlers) {
-      await b.createQueue(name);
-      if (opts.work) {
-        await b.work(name, { pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 2, batchSize: 5 }, async (jobs) => {
-          for (const job of jobs) await handler(job.data, { id: job.id });
-        });
-      }
-    }
+    if (opts.work) workOptions = { pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 2 };
+    for (const [name, { handler }] of handlers) await attach(b, name, handler, opts.work);
     boss = b;
     return b;
   })();
@@ -55,5 +62,6 @@ export async function stopJobs(): Promise<void> {
   const b = boss ?? (starting ? await starting.catch(() => undefined) : undefined);
   boss = undefined;
   starting = undefined;
+  workOptions = undefined;
   if (b) await b.stop({ graceful: true, wait: true, timeout: 5_000 });
 }

@@ -6,6 +6,11 @@ declare module 'express-session' {
     userId?: string;
     /** Sign-in time, for the absolute session lifetime. */
     signedInAt?: number;
+    /**
+     * The password was right but the account has two-step sign-in: who is
+     * signing in, until when (ms) the code may come. Not signed in yet.
+     */
+    mfaPending?: { userId: string; email: string; until: number };
   }
 }
 

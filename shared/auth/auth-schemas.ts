@@ -62,6 +62,13 @@ export const passwordResetConfirmSchema = z.object({
 });
 export type PasswordResetConfirm = z.infer<typeof passwordResetConfirmSchema>;
 
+/** POST /api/auth/password: the current password again, and the new one. */
+export const passwordChangeSchema = z.object({
+  currentPassword: z.string().min(1, 'Enter your current password').max(1024),
+  newPassword: passwordSchema,
+});
+export type PasswordChangeInput = z.infer<typeof passwordChangeSchema>;
+
 export const preferencesUpdateSchema = z
   .object({
     displayName: displayNameSchema,
@@ -85,6 +92,8 @@ export const currentUserSchema = z.object({
   temperatureUnit: temperatureUnitPrefSchema,
   massUnit: massUnitPrefSchema,
   theme: themeSchema,
+  /** Whether signing in asks for a one-time code as well. */
+  mfaEnabled: z.boolean().default(false),
   memberships: z.array(membershipSummarySchema),
 });
 export type CurrentUser = z.infer<typeof currentUserSchema>;

@@ -11,7 +11,8 @@ export type Entity =
   | 'mark'
   | 'report'
   | 'comment'
-  | 'rule';
+  | 'rule'
+  | 'alloy';
 /** own: the actor's own; mentee: owned by a student the actor mentors; any: anyone's in the workshop. */
 export type Access = 'own' | 'mentee' | 'any';
 export type Permission = `${Action}:${Entity}:${Access}`;
@@ -39,6 +40,9 @@ const GRANTS = {
     'create:comment:own',
     'update:comment:own',
     'delete:comment:own',
+    // Everyone may read the rules that rank their causes (evidence before verdict).
+    'read:rule:any',
+    'read:alloy:any',
   ],
   caster: [
     'read:workshop:any',
@@ -63,6 +67,9 @@ const GRANTS = {
     'create:comment:own',
     'update:comment:own',
     'delete:comment:own',
+    // Everyone may read the rules that rank their causes (evidence before verdict).
+    'read:rule:any',
+    'read:alloy:any',
   ],
   mentor: [
     'read:workshop:any',
@@ -85,6 +92,10 @@ const GRANTS = {
     'delete:comment:own',
     'read:rule:any',
     'update:rule:any',
+    // Reviewers tune the workshop's rule set: they add rules and remove the ones added.
+    'create:rule:any',
+    'delete:rule:any',
+    'read:alloy:any',
   ],
   admin: [
     'read:workshop:any',
@@ -114,6 +125,12 @@ const GRANTS = {
     'delete:comment:any',
     'read:rule:any',
     'update:rule:any',
+    'create:rule:any',
+    'delete:rule:any',
+    'read:alloy:any',
+    'create:alloy:any',
+    'update:alloy:any',
+    'delete:alloy:any',
   ],
 } as const satisfies Record<Role, readonly Permission[]>;
 

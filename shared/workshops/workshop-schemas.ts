@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { emailSchema, tokenSchema, displayNameSchema, passwordSchema } from '../auth/auth-schemas.ts';
-import { roleSchema } from '../auth/roles.ts';
+import { roleSchema, type Role } from '../auth/roles.ts';
 
 export const WORKSHOP_KINDS = ['school', 'makerspace', 'foundry', 'home'] as const;
 export const workshopKindSchema = z.enum(WORKSHOP_KINDS);
@@ -28,8 +28,18 @@ export const workshopSchema = z.object({
   role: roleSchema,
   memberCount: z.number().int(),
   createdAt: z.string(),
+  /** Mentors and admins must use two-step sign-in to work in this workshop. */
+  requireMfaForStaff: z.boolean().default(false),
 });
 export type Workshop = z.infer<typeof workshopSchema>;
+
+/** The roles a workshop's two-step requirement applies to: they see every member's work. */
+export const STAFF_ROLES = ['mentor', 'admin'] as const satisfies readonly Role[];
+export const isStaffRole = (role: Role) => (STAFF_ROLES as readonly Role[]).includes(role);
+
+/** PATCH /workshops/:workshopId (admins). */
+export const workshopUpdateSchema = z.object({ requireMfaForStaff: z.boolean() });
+export type WorkshopUpdateInput = z.infer<typeof workshopUpdateSchema>;
 
 export const memberSchema = z.object({
   userId: z.uuid(),

@@ -5,6 +5,7 @@ import {
   ClipboardList,
   Flame,
   Images,
+  Library,
   Settings,
   ShieldAlert,
   Thermometer,
@@ -33,6 +34,7 @@ export function buildNavItems(workshop: Workshop | null, user: CurrentUser): Nav
       { id: 'guide', label: 'Guide', href: paths.guide.getHref(id), icon: BookOpen, placement: 'primary' },
       { id: 'equipment', label: 'Equipment', href: paths.equipment.getHref(id), icon: Wrench, placement: 'more' },
       { id: 'calculators', label: 'Calculators', href: paths.calculators.getHref(id), icon: Calculator, placement: 'more' },
+      { id: 'alloys', label: 'Alloy library', href: paths.alloys.getHref(id), icon: Library, placement: 'more' },
       { id: 'insights', label: 'Insights', href: paths.insights.getHref(id), icon: ChartLine, placement: 'more' },
       { id: 'heat-treatment', label: 'Heat treatment', href: paths.heatTreatment.getHref(id), icon: Thermometer, placement: 'more' },
     );

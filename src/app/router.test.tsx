@@ -12,6 +12,8 @@ describe('session gate', () => {
       'GET /api/auth/me': buildSession(null, 'csrf-before'),
       'POST /api/auth/sign-in': () => json(signedIn),
       'GET /api/workshops': [workshop],
+      [`GET /api/workshops/${workshop.id}/photos`]: { items: [], nextCursor: null },
+      [`GET /api/workshops/${workshop.id}/members`]: [],
     });
     const { user, router } = renderApp(`/w/${workshop.id}/gallery`);
 

@@ -28,7 +28,10 @@ export const paths = {
   },
 
   createWorkshop: { path: '/workshops/new', getHref: () => '/workshops/new' },
-  settings: { path: '/settings', getHref: () => '/settings' },
+  settings: {
+    path: '/settings',
+    getHref: (section?: string) => (section ? `/settings#${section}` : '/settings'),
+  },
   safety: {
     path: '/safety',
     getHref: (section?: string) => (section ? `/safety#${section}` : '/safety'),
@@ -47,7 +50,57 @@ export const paths = {
   calculators: inWorkshop('calculators'),
   insights: inWorkshop('insights'),
   heatTreatment: inWorkshop('heat-treatment'),
+  heatTreatmentDetail: {
+    path: '/w/:workshopId/heat-treatment/:heatTreatmentId',
+    getHref: (workshopId: string, heatTreatmentId: string) =>
+      `/w/${encodeURIComponent(workshopId)}/heat-treatment/${encodeURIComponent(heatTreatmentId)}`,
+  },
+  heatTreatmentSheet: {
+    path: '/w/:workshopId/heat-treatment/:heatTreatmentId/sheet',
+    getHref: (workshopId: string, heatTreatmentId: string) =>
+      `/w/${encodeURIComponent(workshopId)}/heat-treatment/${encodeURIComponent(heatTreatmentId)}/sheet`,
+  },
   members: inWorkshop('members'),
+  guideKind: {
+    path: '/w/:workshopId/guide/:kindId',
+    getHref: (workshopId: string, kindId: string) => `/w/${encodeURIComponent(workshopId)}/guide/${encodeURIComponent(kindId)}`,
+  },
+  calculator: {
+    path: '/w/:workshopId/calculators/:calculatorId',
+    getHref: (workshopId: string, calculatorId: string) =>
+      `/w/${encodeURIComponent(workshopId)}/calculators/${encodeURIComponent(calculatorId)}`,
+  },
+  alloys: inWorkshop('alloys'),
+  // The heat log's own pages; the fixed segments (new, import) rank above :heatId.
+  heatNew: inWorkshop('heats/new'),
+  heatImport: inWorkshop('heats/import'),
+  heat: {
+    path: '/w/:workshopId/heats/:heatId',
+    getHref: (workshopId: string, heatId: string) => `/w/${encodeURIComponent(workshopId)}/heats/${encodeURIComponent(heatId)}`,
+  },
+  heatEdit: {
+    path: '/w/:workshopId/heats/:heatId/edit',
+    getHref: (workshopId: string, heatId: string) => `/w/${encodeURIComponent(workshopId)}/heats/${encodeURIComponent(heatId)}/edit`,
+  },
+  furnace: {
+    path: '/w/:workshopId/equipment/furnaces/:furnaceId',
+    getHref: (workshopId: string, furnaceId: string) =>
+      `/w/${encodeURIComponent(workshopId)}/equipment/furnaces/${encodeURIComponent(furnaceId)}`,
+  },
+  crucible: {
+    path: '/w/:workshopId/equipment/crucibles/:crucibleId',
+    getHref: (workshopId: string, crucibleId: string) =>
+      `/w/${encodeURIComponent(workshopId)}/equipment/crucibles/${encodeURIComponent(crucibleId)}`,
+  },
+  photo: {
+    path: '/w/:workshopId/photos/:photoId',
+    getHref: (workshopId: string, photoId: string) => `/w/${encodeURIComponent(workshopId)}/photos/${encodeURIComponent(photoId)}`,
+  },
+  casting: {
+    path: '/w/:workshopId/heats/:heatId/castings/:castingId',
+    getHref: (workshopId: string, heatId: string, castingId: string) =>
+      `/w/${encodeURIComponent(workshopId)}/heats/${encodeURIComponent(heatId)}/castings/${encodeURIComponent(castingId)}`,
+  },
 } as const;
 
 /**

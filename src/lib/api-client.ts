@@ -72,22 +72,38 @@ async function readBody(response: Response): Promise<unknown> {
   }
 }
 
-function toApiError(response: Response, body: unknown): ApiError {
+/**
+ * The ApiError for a failed answer, from its status, parsed body and
+ * Retry-After header. Exported for requests that cannot go through fetch
+ * (photo uploads use XMLHttpRequest for their progress events).
+ */
+export function apiErrorFrom(status: number, body: unknown, retryAfter: string | null): ApiError {
   const parsed = apiErrorBodySchema.safeParse(body);
-  const retryAfterSeconds = parseRetryAfter(response.headers.get('retry-after'));
+  const retryAfterSeconds = parseRetryAfter(retryAfter);
   if (parsed.success) {
     const { code, message, issues } = parsed.data.error;
-    return new ApiError({ status: response.status, code, message, issues, retryAfterSeconds });
+    return new ApiError({ status, code, message, issues, retryAfterSeconds });
   }
   return new ApiError({
-    status: response.status,
-    code: `http-${response.status}`,
-    message:
-      response.status >= 500
-        ? 'Something went wrong on the server. Try again in a moment.'
-        : `The server answered ${response.status}.`,
+    status,
+    code: `http-${status}`,
+    message: status >= 500 ? 'Something went wrong on the server. Try again in a moment.' : `The server answered ${status}.`,
     retryAfterSeconds,
   });
+}
+
+function toApiError(response: Response, body: unknown): ApiError {
+  return apiErrorFrom(response.status, body, response.headers.get('retry-after'));
+}
+
+/**
+ * The session's CSRF token for a request made outside `apiClient` (an
+ * XMLHttpRequest upload); `fresh` fetches a new one, after a `csrf-invalid`.
+ */
+export async function csrfTokenForRequest({ fresh = false } = {}): Promise<string | undefined> {
+  if (!csrfSource) return undefined;
+  if (fresh) return csrfSource.refresh();
+  return csrfSource.get() ?? (await csrfSource.refresh());
 }
 
 async function send(

@@ -17,6 +17,7 @@ export function buildUser(overrides: Partial<CurrentUser> = {}): CurrentUser {
     temperatureUnit: 'C',
     massUnit: 'g',
     theme: 'system',
+    mfaEnabled: false,
     memberships: [],
     ...overrides,
   };
@@ -34,6 +35,7 @@ export function buildWorkshop(overrides: Partial<Workshop> = {}): Workshop {
     role: 'student' as Role,
     memberCount: 3,
     createdAt: '2026-01-10T09:00:00.000Z',
+    requireMfaForStaff: false,
     ...overrides,
   };
 }

@@ -3,6 +3,8 @@ import { vi } from 'vitest';
 export type StubbedRequest = {
   method: string;
   path: string;
+  /** The query string's parameters (routes match on the path alone). */
+  query: URLSearchParams;
   headers: Headers;
   body: unknown;
 };
@@ -32,7 +34,7 @@ export function stubApi(routes: Record<string, Handler | object>) {
     const url = new URL(input instanceof Request ? input.url : String(input), 'http://localhost');
     const method = (init?.method ?? 'GET').toUpperCase();
     const body = typeof init?.body === 'string' ? (JSON.parse(init.body) as unknown) : undefined;
-    const request: StubbedRequest = { method, path: url.pathname, headers: new Headers(init?.headers), body };
+    const request: StubbedRequest = { method, path: url.pathname, query: url.searchParams, headers: new Headers(init?.headers), body };
     requests.push(request);
     const route = routes[`${method} ${url.pathname}`];
     if (route === undefined) {

@@ -1,6 +1,10 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach, beforeEach, vi, type MockInstance } from 'vitest';
+
+// findBy/waitFor wait up to 5 s: on a loaded 2-core machine the first render
+// of a lazy page can take longer than the library's default second.
+configure({ asyncUtilTimeout: 5_000 });
 
 // A test that makes React (or our code) call console.error fails: broken
 // renders, act() warnings and unhandled requests must not pass quietly.

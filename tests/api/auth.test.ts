@@ -226,3 +226,48 @@ describe('password reset', () => {
     expect(res.body.error.code).toBe('token-invalid');
   });
 });
+
+describe('sign-in answers reveal nothing (ASVS 5.0 V6.3.8)', () => {
+  // Not a speed target: both paths must look alike. The unknown e-mail is
+  // checked against a dummy bcrypt hash of the same cost, so the medians of
+  // the two stay close; 150 ms is generous for a busy 2-core machine.
+  test('when the e-mail is unknown or the password wrong, then the answers are byte-identical and take as long', async () => {
+    // Arrange
+    const user = await insertUser();
+    const b = await browser(t.app);
+    const unknownTimes: number[] = [];
+    const wrongTimes: number[] = [];
+    const answers = new Set<string>();
+    const timed = async (body: { email: string; password: string }, into: number[]) => {
+      const started = performance.now();
+      const res = await b.post('/api/auth/sign-in', body);
+      into.push(performance.now() - started);
+      answers.add(`${res.status} ${res.headers['content-type']} ${res.text}`);
+    };
+    const median = (xs: number[]) => [...xs].sort((x, y) => x - y)[Math.floor(xs.length / 2)];
+
+    const unknown = (i: number) => timed({ email: uniqueEmail(), password: `unknown account ${i}` }, unknownTimes);
+    const wrong = (i: number) => timed({ email: user.email, password: `wrong password ${i}` }, wrongTimes);
+
+    // Act: one untimed pair warms both paths up; then the tries alternate in
+    // A-B, B-A order, so drift in the machine's load hits both alike.
+    await unknown(-1);
+    await wrong(-1);
+    unknownTimes.length = 0;
+    wrongTimes.length = 0;
+    for (let i = 0; i < 5; i++) {
+      if (i % 2 === 0) {
+        await unknown(i);
+        await wrong(i);
+      } else {
+        await wrong(i);
+        await unknown(i);
+      }
+    }
+
+    // Assert
+    expect([...answers]).toHaveLength(1);
+    expect([...answers][0]).toMatch(/^401 application\/json/);
+    expect(Math.abs(median(unknownTimes) - median(wrongTimes))).toBeLessThan(150);
+  });
+});

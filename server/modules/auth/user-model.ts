@@ -16,6 +16,10 @@ export class UserModel extends Model<InferAttributes<UserModel>, InferCreationAt
   declare massUnit: CreationOptional<'g' | 'oz'>;
   declare theme: CreationOptional<'system' | 'light' | 'dark'>;
   declare passwordChangedAt: CreationOptional<Date>;
+  /** Sealed by server/lib/secret-box.ts; pending until totpEnabledAt is set. */
+  declare totpSecret: CreationOptional<string | null>;
+  declare totpEnabledAt: CreationOptional<Date | null>;
+  declare totpLastStep: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -30,6 +34,9 @@ UserModel.init(
     massUnit: { type: DataTypes.STRING(2), allowNull: false, defaultValue: 'g' },
     theme: { type: DataTypes.STRING(6), allowNull: false, defaultValue: 'system' },
     passwordChangedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+    totpSecret: { type: DataTypes.STRING(200), allowNull: true },
+    totpEnabledAt: { type: DataTypes.DATE, allowNull: true },
+    totpLastStep: { type: DataTypes.INTEGER, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -10,9 +10,16 @@ export type UserRow = {
   temperatureUnit: 'C' | 'F';
   massUnit: 'g' | 'oz';
   theme: 'system' | 'light' | 'dark';
+  /** Set once the account confirmed an authenticator; sign-in then asks for a code. */
+  totpEnabledAt: Date | null;
 };
 
-const plain = (u: UserModel | null): UserRow | null => (u ? (u.get({ plain: true }) as UserRow) : null);
+// The sealed one-time-code secret stays in the MFA repository's reads only.
+const plain = (u: UserModel | null): UserRow | null => {
+  if (!u) return null;
+  const { totpSecret: _secret, totpLastStep: _step, ...row } = u.get({ plain: true });
+  return row as UserRow;
+};
 
 export async function findByEmail(email: string): Promise<UserRow | null> {
   return plain(await UserModel.findOne({ where: { email } }));
@@ -40,7 +47,7 @@ export async function setPasswordHash(id: string, passwordHash: string, tx?: Tx)
   await UserModel.update({ passwordHash, passwordChangedAt: new Date() }, { where: { id }, transaction: tx });
 }
 
-/** Ends every stored session of a user, optionally keeping one. */
+/** Ends every stored session of a user, optionally keeping one (the caller's own). */
 export async function endSessions(userId: string, exceptSid?: string, tx?: Tx): Promise<void> {
   await sequelize.query('DELETE FROM sessions WHERE user_id = :userId AND sid <> :exceptSid', {
     replacements: { userId, exceptSid: exceptSid ?? '' },

@@ -14,6 +14,7 @@ export class WorkshopModel extends Model<InferAttributes<WorkshopModel>, InferCr
   declare name: string;
   declare kind: (typeof WORKSHOP_KINDS)[number];
   declare createdBy: string | null;
+  declare requireMfaForStaff: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -24,6 +25,7 @@ WorkshopModel.init(
     name: { type: DataTypes.STRING(120), allowNull: false },
     kind: { type: DataTypes.STRING(20), allowNull: false },
     createdBy: { type: DataTypes.UUID, allowNull: true },
+    requireMfaForStaff: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

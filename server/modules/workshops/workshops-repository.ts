@@ -16,7 +16,7 @@ export async function membershipsOf(userId: string) {
 
 export async function workshopsOf(userId: string): Promise<Workshop[]> {
   const rows = await sequelize.query<Omit<Workshop, 'createdAt'> & { createdAt: Date }>(
-    `SELECT w.id, w.name, w.kind, m.role, w.created_at AS "createdAt",
+    `SELECT w.id, w.name, w.kind, m.role, w.created_at AS "createdAt", w.require_mfa_for_staff AS "requireMfaForStaff",
             (SELECT count(*)::int FROM memberships x WHERE x.workshop_id = w.id) AS "memberCount"
        FROM memberships m JOIN workshops w ON w.id = m.workshop_id
       WHERE m.user_id = :userId
@@ -29,6 +29,29 @@ export async function workshopsOf(userId: string): Promise<Workshop[]> {
 export async function findRole(workshopId: string, userId: string): Promise<Role | null> {
   const m = await MembershipModel.findOne({ where: { workshopId, userId }, attributes: ['role'], raw: true });
   return m?.role ?? null;
+}
+
+/**
+ * What requireMember needs in one query: the role, whether the workshop
+ * requires two-step sign-in of its staff, and whether this user has it on.
+ */
+export async function findAccess(
+  workshopId: string,
+  userId: string,
+): Promise<{ role: Role; requireMfaForStaff: boolean; mfaEnabled: boolean } | null> {
+  const [row] = await sequelize.query<{ role: Role; requireMfaForStaff: boolean; mfaEnabled: boolean }>(
+    `SELECT m.role, w.require_mfa_for_staff AS "requireMfaForStaff", (u.totp_enabled_at IS NOT NULL) AS "mfaEnabled"
+       FROM memberships m
+       JOIN workshops w ON w.id = m.workshop_id
+       JOIN users u ON u.id = m.user_id
+      WHERE m.workshop_id = :workshopId AND m.user_id = :userId`,
+    { replacements: { workshopId, userId }, type: QueryTypes.SELECT },
+  );
+  return row ?? null;
+}
+
+export async function setRequireMfaForStaff(workshopId: string, requireMfaForStaff: boolean): Promise<void> {
+  await WorkshopModel.update({ requireMfaForStaff }, { where: { id: workshopId } });
 }
 
 export async function createWorkshop(

@@ -3,6 +3,7 @@ import {
   memberParamsSchema,
   memberUpdateSchema,
   workshopCreateSchema,
+  workshopUpdateSchema,
 } from '../../../shared/workshops/workshop-schemas.ts';
 import { requireMember } from '../../middleware/require-member.ts';
 import { requireUser } from '../../middleware/require-user.ts';
@@ -17,6 +18,11 @@ workshopsRouter.get('/workshops', requireUser, async (_req, res) => {
 workshopsRouter.post('/workshops', requireUser, async (req, res) => {
   const input = workshopCreateSchema.parse(req.body);
   res.status(201).json(await workshopsService.createWorkshop(res.locals.userId, input));
+});
+
+workshopsRouter.patch('/workshops/:workshopId', requireMember, async (req, res) => {
+  const input = workshopUpdateSchema.parse(req.body);
+  res.json(await workshopsService.updateWorkshop(res.locals.actor, res.locals.workshopId, input));
 });
 
 workshopsRouter.get('/workshops/:workshopId/members', requireMember, async (_req, res) => {

@@ -1,6 +1,13 @@
 import { can } from '../../../shared/auth/permissions.ts';
 import type { Actor } from '../../../shared/auth/roles.ts';
-import type { Member, MemberUpdateInput, Workshop, WorkshopCreateInput } from '../../../shared/workshops/workshop-schemas.ts';
+import {
+  isStaffRole,
+  type Member,
+  type MemberUpdateInput,
+  type Workshop,
+  type WorkshopCreateInput,
+  type WorkshopUpdateInput,
+} from '../../../shared/workshops/workshop-schemas.ts';
 import { withTransaction } from '../../db/sequelize.ts';
 import { AppError, forbidden } from '../../lib/app-error.ts';
 import * as repo from './workshops-repository.ts';
@@ -17,6 +24,45 @@ export async function actorIn(workshopId: string, userId: string): Promise<Actor
   const role = await repo.findRole(workshopId, userId);
   if (!role) throw new AppError('workshop-not-found', 'Workshop not found', 404);
   return { id: userId, role };
+}
+
+/**
+ * The actor for requireMember: as actorIn, and a mentor or admin of a
+ * workshop that requires two-step sign-in of its staff gets 403 mfa-required
+ * until their account has it on. Students and casters are not affected.
+ */
+export async function memberActor(workshopId: string, userId: string): Promise<Actor> {
+  const access = await repo.findAccess(workshopId, userId);
+  if (!access) throw new AppError('workshop-not-found', 'Workshop not found', 404);
+  if (access.requireMfaForStaff && isStaffRole(access.role) && !access.mfaEnabled) {
+    throw new AppError(
+      'mfa-required',
+      'This workshop asks its mentors and admins to use two-step sign-in. Turn it on in your settings to carry on here.',
+      403,
+    );
+  }
+  return { id: userId, role: access.role };
+}
+
+/**
+ * An admin changes the workshop's settings. Requiring two-step sign-in of
+ * staff is refused while the admin's own account lacks it: they would lock
+ * themselves out of the workshop the moment it took effect.
+ */
+export async function updateWorkshop(actor: Actor, workshopId: string, input: WorkshopUpdateInput): Promise<Workshop> {
+  if (!can(actor, 'update', 'workshop')) throw forbidden('Only the workshop’s admins change its settings');
+  if (input.requireMfaForStaff) {
+    const own = await repo.findAccess(workshopId, actor.id);
+    if (!own?.mfaEnabled) {
+      throw new AppError(
+        'mfa-needed-first',
+        'Turn on two-step sign-in for your own account first (in Settings), so requiring it does not lock you out of this workshop.',
+        409,
+      );
+    }
+  }
+  await repo.setRequireMfaForStaff(workshopId, input.requireMfaForStaff);
+  return (await repo.workshopsOf(actor.id)).find((w) => w.id === workshopId)!;
 }
 
 export async function listWorkshops(userId: string): Promise<Workshop[]> {

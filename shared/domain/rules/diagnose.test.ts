@@ -317,7 +317,9 @@ describe('diagnose: options and edges', () => {
     expect(cautions[0].id).toBe('borax_on_aluminium');
   });
 
-  test('when 250 rules are evaluated, then a diagnosis takes well under 1 ms', () => {
+  // Its speed is measured by `npm run bench` (diagnose row), not here: a timed
+  // test fails on a busy machine for no fault of the code.
+  test('when 250 rules are evaluated repeatedly, then every call gives the same valid ranking', () => {
     const many: Rule[] = Array.from({ length: 250 }, (_, i) => ({ ...DEFAULT_RULES[i % DEFAULT_RULES.length], id: `rule-${i}` }));
     const input: DiagnoseInput = {
       alloy: a356,
@@ -328,11 +330,10 @@ describe('diagnose: options and edges', () => {
       ],
       conditions: { pourTempC: 800, degassed: false, ambientTempC: 25, relativeHumidityPct: 70, moldMaterial: 'graphite', moldTempC: 120 },
     };
-    diagnose(input, { rules: many }); // validates and compiles once
-    const runs = 300;
-    const start = performance.now();
-    for (let i = 0; i < runs; i++) diagnose(input, { rules: many });
-    const perCall = (performance.now() - start) / runs;
-    expect(perCall).toBeLessThan(1);
+    const first = diagnose(input, { rules: many }); // validates and compiles once
+    for (let i = 0; i < 50; i++) expect(diagnose(input, { rules: many })).toEqual(first);
+    expect(first.causes.length).toBeGreaterThan(0);
+    for (const c of first.causes) expect(c.score).toBeGreaterThanOrEqual(0);
+    for (const c of first.causes) expect(c.score).toBeLessThanOrEqual(1);
   });
 });

@@ -3,6 +3,7 @@ import { RotateCcw } from 'lucide-react';
 import { paths } from '#src/config/paths.ts';
 import { Button, buttonClasses } from '#src/components/ui/button.tsx';
 import { errorMessage } from '#src/components/ui/error-boundary.tsx';
+import { isMfaRequired, MfaRequiredNotice } from '#src/components/ui/mfa-required-notice.tsx';
 import { Notice } from '#src/components/ui/notice.tsx';
 
 /** A route's errorElement: a 404 says so plainly; anything else offers to try again. */
@@ -19,6 +20,14 @@ export function RouteError() {
             Go to your workshop
           </Link>
         </Notice>
+      </div>
+    );
+  }
+
+  if (isMfaRequired(error)) {
+    return (
+      <div className="mx-auto max-w-prose p-6">
+        <MfaRequiredNotice />
       </div>
     );
   }

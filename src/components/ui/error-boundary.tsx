@@ -1,6 +1,7 @@
 import { Component, type ErrorInfo, type ReactNode } from 'react';
 import { RotateCcw } from 'lucide-react';
 import { Button } from './button.tsx';
+import { isMfaRequired, MfaRequiredNotice } from './mfa-required-notice.tsx';
 import { Notice } from './notice.tsx';
 
 export type ErrorFallbackProps = { error: unknown; reset: () => void };
@@ -21,6 +22,8 @@ export function errorMessage(error: unknown): string {
 
 /** The default fallback: says what failed and offers to try again. */
 export function ErrorPanel({ error, reset, title = 'This part of the page did not load' }: ErrorFallbackProps & { title?: string }) {
+  // Trying again cannot help here; setting up two-step sign-in can.
+  if (isMfaRequired(error)) return <MfaRequiredNotice />;
   return (
     <Notice tone="danger" title={title} role="alert">
       <p>{errorMessage(error)}</p>

@@ -6,12 +6,21 @@ import { apiError, json, stubApi } from '#src/testing/fetch-stub.ts';
 import { buildSession, buildUser, buildWorkshop } from '#src/testing/data.ts';
 import { renderApp } from '#src/testing/render.tsx';
 
+// The heats page is the first lazy page these tests open; its code (the
+// table, the filters) takes longer than findBy's default second to load cold.
+const HEATS_PAGE_WAIT = { timeout: 5000 };
+
 function signedInAs(role: Role, extraRoutes: Parameters<typeof stubApi>[0] = {}) {
   const workshop = buildWorkshop({ role });
   const user = buildUser({ memberships: [{ workshopId: workshop.id, workshopName: workshop.name, role }] });
   const api = stubApi({
     'GET /api/auth/me': buildSession(user, 'csrf-shell'),
     'GET /api/workshops': [workshop],
+    // The heats page these tests land on reads the log and its filter choices.
+    [`GET /api/workshops/${workshop.id}/heats`]: { items: [], nextCursor: null },
+    [`GET /api/workshops/${workshop.id}/members`]: [],
+    [`GET /api/workshops/${workshop.id}/furnaces`]: [],
+    [`GET /api/workshops/${workshop.id}/crucibles`]: [],
     ...extraRoutes,
   });
   return { workshop, user, api };
@@ -22,7 +31,7 @@ describe('app shell navigation', () => {
     const { workshop } = signedInAs(role);
     renderApp(`/w/${workshop.id}/heats`);
 
-    expect(await screen.findByRole('heading', { level: 1, name: 'Heats' })).toBeInTheDocument();
+    expect(await screen.findByRole('heading', { level: 1, name: 'Heats' }, HEATS_PAGE_WAIT)).toBeInTheDocument();
     expect(screen.getAllByRole('link', { name: 'Gallery' }).length).toBeGreaterThan(0);
     expect(screen.queryByRole('link', { name: 'Members' })).not.toBeInTheDocument();
   });
@@ -30,7 +39,7 @@ describe('app shell navigation', () => {
   test('when an admin opens the More sheet, then Members is there with the other places', async () => {
     const { workshop } = signedInAs('admin');
     const { user } = renderApp(`/w/${workshop.id}/heats`);
-    await screen.findByRole('heading', { level: 1, name: 'Heats' });
+    await screen.findByRole('heading', { level: 1, name: 'Heats' }, HEATS_PAGE_WAIT);
 
     await user.click(screen.getByRole('button', { name: 'More' }));
 
@@ -54,7 +63,7 @@ describe('unit toggles in the user menu', () => {
       'PATCH /api/auth/me': ({ body }) => json({ ...buildUser({ id: 'x' }), ...(body as object), id: me.id, memberships: me.memberships }),
     });
     const { user } = renderApp(`/w/${workshop.id}/heats`);
-    await screen.findByRole('heading', { level: 1, name: 'Heats' });
+    await screen.findByRole('heading', { level: 1, name: 'Heats' }, HEATS_PAGE_WAIT);
 
     await user.click(screen.getByRole('button', { name: /account and units/ }));
     const panel = screen.getByRole('region', { name: 'Account and units' });
@@ -72,7 +81,7 @@ describe('unit toggles in the user menu', () => {
       'PATCH /api/auth/me': () => apiError(500, 'internal', 'The server could not save that'),
     });
     const { user } = renderApp(`/w/${workshop.id}/heats`);
-    await screen.findByRole('heading', { level: 1, name: 'Heats' });
+    await screen.findByRole('heading', { level: 1, name: 'Heats' }, HEATS_PAGE_WAIT);
 
     await user.click(screen.getByRole('button', { name: /account and units/ }));
     const panel = screen.getByRole('region', { name: 'Account and units' });
@@ -90,13 +99,17 @@ describe('signing out', () => {
     const api = stubApi({
       'GET /api/auth/me': () => json(session),
       'GET /api/workshops': [workshop],
+      [`GET /api/workshops/${workshop.id}/heats`]: { items: [], nextCursor: null },
+      [`GET /api/workshops/${workshop.id}/members`]: [],
+      [`GET /api/workshops/${workshop.id}/furnaces`]: [],
+      [`GET /api/workshops/${workshop.id}/crucibles`]: [],
       'POST /api/auth/sign-out': () => {
         session = buildSession(null, 'csrf-signed-out');
         return new Response(null, { status: 204 });
       },
     });
     const { user, router, queryClient } = renderApp(`/w/${workshop.id}/heats`);
-    await screen.findByRole('heading', { level: 1, name: 'Heats' });
+    await screen.findByRole('heading', { level: 1, name: 'Heats' }, HEATS_PAGE_WAIT);
 
     await user.click(screen.getByRole('button', { name: /account and units/ }));
     await user.click(screen.getByRole('button', { name: 'Sign out' }));

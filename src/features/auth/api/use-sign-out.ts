@@ -11,11 +11,12 @@ const signOutMutationKey = [...sessionQueries.all(), 'sign-out'] as const;
  * its new CSRF token) is fetched. While this runs, the session gate and the
  * sign-in page hold still (see useIsSigningOut) instead of redirecting.
  */
-export function useSignOut({ beforeReset }: { beforeReset?: () => unknown } = {}) {
+export function useSignOut({ beforeReset, everywhere = false }: { beforeReset?: () => unknown; everywhere?: boolean } = {}) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationKey: signOutMutationKey,
-    mutationFn: () => apiClient.post('/auth/sign-out'),
+    // Everywhere: every session of the account ends, on every device, this one too.
+    mutationFn: () => apiClient.post(everywhere ? '/auth/sign-out-everywhere' : '/auth/sign-out'),
     onSuccess: async () => {
       await beforeReset?.();
       queryClient.setQueryData(sessionQueries.me().queryKey, (old) => (old ? { ...old, user: null, csrfToken: '' } : old));

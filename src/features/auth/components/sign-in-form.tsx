@@ -10,6 +10,7 @@ import { isApiError } from '#src/lib/api-client.ts';
 import { applyServerErrors } from '#src/lib/form-errors.ts';
 import { formatWait } from '#src/lib/format.ts';
 import { useSignIn } from '../api/use-sign-in.ts';
+import { MfaCodeStep } from './mfa-code-step.tsx';
 
 function signInProblem(error: unknown, fallback: string | null): string | null {
   if (isApiError(error, 'invalid-credentials')) {
@@ -22,19 +23,35 @@ function signInProblem(error: unknown, fallback: string | null): string | null {
   return fallback;
 }
 
-/** E-mail and password. On success the session query holds the user; the page moves on. */
+/**
+ * E-mail and password, then (for an account with two-step sign-in) the code.
+ * On success the session query holds the user; the page moves on.
+ */
 export function SignInForm({ defaultEmail = '' }: { defaultEmail?: string }) {
   const signIn = useSignIn();
   const [problem, setProblem] = useState<string | null>(null);
+  const [codeStep, setCodeStep] = useState(false);
   const form = useForm<SignInInput>({
     resolver: zodResolver(signInInputSchema),
     defaultValues: { email: defaultEmail, password: '' },
   });
   const { errors } = form.formState;
 
+  if (codeStep) {
+    return (
+      <MfaCodeStep
+        onRestart={() => {
+          form.setValue('password', '');
+          setCodeStep(false);
+        }}
+      />
+    );
+  }
+
   const onSubmit = form.handleSubmit((values) => {
     setProblem(null);
     signIn.mutate(values, {
+      onSuccess: (outcome) => setCodeStep(outcome.kind === 'mfa-required'),
       onError: (error) => setProblem(signInProblem(error, applyServerErrors(error, form.setError, ['email', 'password']))),
     });
   });

@@ -1,21 +1,19 @@
-import { Calculator } from 'lucide-react';
-import { EmptyState } from '#src/components/ui/empty-state.tsx';
+import { useParams } from 'react-router-dom';
 import { PageHeader } from '#src/components/ui/page-header.tsx';
+import { CalculatorIndex } from '#src/features/calculators/components/calculator-index.tsx';
+import { useCurrentUser } from '#src/features/auth/hooks/use-current-user.ts';
 
 export default function CalculatorsPage() {
+  const { workshopId = '' } = useParams();
+  const user = useCurrentUser();
+  const units = user ? `°${user.temperatureUnit} and ${user.massUnit}` : 'your units';
   return (
     <>
-      <PageHeader title="Calculators" description="Figures worked out from your own inputs." />
-      <EmptyState
-        icon={Calculator}
-        title="No calculators here yet"
-        firstStep={<p>Check your units in the account menu, top right: every calculator will work in the temperature and weight units you choose.</p>}
-      >
-        <p>
-          The calculators will work out the figures casters need before a pour: how much metal a mould takes, charge make-up for a target
-          alloy, shrinkage allowance for a pattern, and riser size. Each result sits beside the inputs it came from, with its unit.
-        </p>
-      </EmptyState>
+      <PageHeader
+        title="Calculators"
+        description={`Figures worked out from your own inputs, each with its formula and where it comes from. They work in ${units}; change that in the account menu, top right.`}
+      />
+      <CalculatorIndex workshopId={workshopId} />
     </>
   );
 }

@@ -1,31 +1,38 @@
-import { Images } from 'lucide-react';
-import { useParams } from 'react-router-dom';
-import { EmptyState } from '#src/components/ui/empty-state.tsx';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
+import { useMemo } from 'react';
+import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '#src/components/ui/page-header.tsx';
-import { TextLink } from '#src/components/ui/text-link.tsx';
-import { paths } from '#src/config/paths.ts';
+import { requireUser } from '#src/features/auth/lib/require-session.ts';
+import { photoQueries } from '#src/features/photos/api/photo-queries.ts';
+import { GalleryView } from '#src/features/photos/components/gallery-view.tsx';
+import { filtersOf, parseGalleryView } from '#src/features/photos/lib/gallery-filters.ts';
+import { memberQueries } from '#src/features/workshops/api/workshop-queries.ts';
+
+/** The first page of photos and the members (for the caster filter) start loading with the page. */
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ params, request }: LoaderFunctionArgs) => {
+    await requireUser(queryClient, request);
+    const workshopId = params.workshopId ?? '';
+    const view = parseGalleryView(new URL(request.url).searchParams);
+    if (!view.q) void queryClient.prefetchInfiniteQuery(photoQueries.infinite(workshopId, filtersOf(view)));
+    else void queryClient.prefetchQuery(photoQueries.index(workshopId));
+    void queryClient.prefetchQuery(memberQueries.list(workshopId));
+    return null;
+  };
 
 export default function GalleryPage() {
   const { workshopId = '' } = useParams();
+  // The caster filter lists the members; if they do not load, the filter offers "Anyone" only.
+  const members = useQuery(memberQueries.list(workshopId));
+  const casters = useMemo(
+    () => (members.data ?? []).map((m) => ({ id: m.userId, name: m.displayName })).sort((a, b) => a.name.localeCompare(b.name)),
+    [members.data],
+  );
   return (
     <>
-      <PageHeader title="Gallery" description="Photos of the workshop's castings." />
-      <EmptyState
-        icon={Images}
-        title="No photos yet"
-        firstStep={
-          <p>
-            Log a <TextLink to={paths.heats.getHref(workshopId)}>heat</TextLink>, then photograph each casting from it as it comes out of the
-            mould, and again once it is fettled. Good light and one casting per photo make marks easier to read.
-          </p>
-        }
-      >
-        <p>
-          Every photo belongs to a casting, and every casting to the heat it was poured from. On a photo you mark each defect you see: an
-          outline, a number and the defect's name, with its severity.
-        </p>
-        <p>Marked photos are what a defect report is built from.</p>
-      </EmptyState>
+      <PageHeader title="Gallery" description="Photos of the workshop's castings, with their marked defects." />
+      <GalleryView workshopId={workshopId} casters={casters} />
     </>
   );
 }

@@ -7,6 +7,7 @@ import { useCurrentUser } from '#src/features/auth/hooks/use-current-user.ts';
 import { requireUser } from '#src/features/auth/lib/require-session.ts';
 import { invitationQueries, memberQueries, workshopQueries } from '#src/features/workshops/api/workshop-queries.ts';
 import { MembersPanel } from '#src/features/workshops/components/members-panel.tsx';
+import { StaffMfaSwitch } from '#src/features/workshops/components/staff-mfa-switch.tsx';
 
 /** Starts both lists loading with the page; the panels show skeletons until they arrive. */
 export const clientLoader =
@@ -35,7 +36,10 @@ export default function MembersPage() {
     <>
       <PageHeader title="Members" description={`Who works in ${workshop.name}, and what each may do.`} />
       {mayManage ? (
-        <MembersPanel workshopId={workshop.id} currentUserId={user.id} />
+        <div className="flex flex-col gap-6">
+          <MembersPanel workshopId={workshop.id} currentUserId={user.id} />
+          <StaffMfaSwitch workshop={workshop} adminHasMfa={user.mfaEnabled} />
+        </div>
       ) : (
         <Notice tone="info" title="Members are managed by the workshop's admins">
           <p>Ask an admin of {workshop.name} to change roles, assign mentors or invite someone.</p>
