@@ -2,6 +2,7 @@
 // the demo workshop once. Run in its own process so the app's configuration
 // is read from the environment the caller prepared.
 import { closeDatabase, sequelize } from '../server/db/sequelize.ts';
+import { stopJobs } from '../server/lib/jobs.ts';
 import { createMigrator } from '../server/db/migrator.ts';
 import { runSeeders } from '../seeders/run-seeders.ts';
 
@@ -19,5 +20,7 @@ try {
   console.error(`Database set-up failed: ${(error as Error).message}${cause?.message ? `\n  ${cause.message}` : ''}`);
   process.exitCode = 1;
 } finally {
+  // Seeding through the services may queue mail; the queue's pool must close too.
+  await stopJobs();
   await closeDatabase();
 }
