@@ -6,6 +6,7 @@ import {
   FLUX_KINDS,
   HUMIDITY_RISK_LEVELS,
   MOLD_MATERIALS,
+  defectKindIdSchema,
   heatConditionsInputSchema,
   heatConditionsSchema,
   pourYield,
@@ -208,11 +209,8 @@ export const heatFilterSchema = z.object({
   from: dayOrInstantSchema.optional(),
   /** Poured on or before this day (inclusive) or before this instant. */
   to: dayOrInstantSchema.optional(),
-  /**
-   * Accepted so links built for the coming photo marks work today; ignored
-   * until castings carry defect marks.
-   */
-  defect: z.string().max(60).optional(),
+  /** Heats with a casting whose photos carry a mark of this defect kind. */
+  defect: defectKindIdSchema.optional(),
   sort: z.enum(HEAT_SORTS).default('pouredAt'),
   dir: z.enum(SORT_DIRECTIONS).default('desc'),
 });

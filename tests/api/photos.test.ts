@@ -269,3 +269,25 @@ describe('GET /api/workshops/:workshopId/photos', () => {
     expect(res.body.error.code).toBe('cursor-invalid');
   });
 });
+
+describe('GET /api/workshops/:workshopId/heats?defect=', () => {
+  test('when filtered by a defect kind, then only heats with a casting marked with it are listed', async () => {
+    // Arrange: two castings of the same caster; only one gets a gas porosity mark.
+    const s = await setUp();
+    const other = await insertCasting(s.workshop.id, s.caster.id);
+    const photo = (await upload(s.b, s.workshop.id, s.castingId, [{ name: 'a.jpg', body: await ingotPhoto({ seed: 81 }) }])).body.results[0].photo;
+    await upload(s.b, s.workshop.id, other.castingId, [{ name: 'b.jpg', body: await ingotPhoto({ seed: 82 }) }]);
+    await s.b.post(`/api/workshops/${s.workshop.id}/photos/${photo.id}/marks`, { kind: 'gas_porosity', shape: 'point', x: 0.3, y: 0.3 });
+
+    // Act
+    const marked = await s.b.get(`/api/workshops/${s.workshop.id}/heats?defect=gas_porosity`);
+    const none = await s.b.get(`/api/workshops/${s.workshop.id}/heats?defect=hot_tear`);
+    const bad = await s.b.get(`/api/workshops/${s.workshop.id}/heats?defect=bubbles`);
+
+    // Assert
+    expect(marked.status).toBe(200);
+    expect(marked.body.items.map((h: { id: string }) => h.id)).toEqual([s.heatId]);
+    expect(none.body.items).toEqual([]);
+    expect(bad.status).toBe(400);
+  });
+});

@@ -74,6 +74,11 @@ function filterSql(f: Partial<HeatFilter>, replacements: Record<string, unknown>
     where.push('h.crucible_id = :crucibleId');
     replacements.crucibleId = f.crucibleId;
   }
+  if (f.defect) {
+    where.push(`EXISTS (SELECT 1 FROM castings dc JOIN photos dp ON dp.casting_id = dc.id
+                  JOIN marks dm ON dm.photo_id = dp.id WHERE dc.heat_id = h.id AND dm.defect_kind = :defect)`);
+    replacements.defect = f.defect;
+  }
   if (f.from) {
     where.push('h.poured_at >= :from');
     replacements.from = isDay(f.from) ? `${f.from}T00:00:00.000Z` : f.from;
