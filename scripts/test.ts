@@ -73,7 +73,11 @@ try {
     await admin.query('CREATE DATABASE pourscope_e2e');
     await admin.end();
     const e2eEnv = { ...baseEnv, DATABASE_URL: e2eUrl, NODE_ENV: 'development', PORT: String(appPort) };
-    if ((await runNode(TSX, ['scripts/prepare-database.ts'], { env: e2eEnv })) !== 0) throw new Error('seeding the e2e database failed');
+    // Seeded twice: the second run must find everything in place and add nothing
+    // (tests/e2e/demo.e2e.ts counts the rows).
+    for (let run = 0; run < 2; run++) {
+      if ((await runNode(TSX, ['scripts/prepare-database.ts'], { env: e2eEnv })) !== 0) throw new Error('seeding the e2e database failed');
+    }
     server = spawnNode(TSX, ['server/index.ts'], { env: { ...e2eEnv, LOG_LEVEL: 'warn' } });
     const baseUrl = `http://127.0.0.1:${appPort}`;
     const deadline = Date.now() + 30_000;

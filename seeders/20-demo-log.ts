@@ -5,7 +5,7 @@ import { heatCreateSchema } from '../shared/heats/heat-schemas.ts';
 import * as equipmentService from '../server/modules/equipment/equipment-service.ts';
 import * as heatsService from '../server/modules/heats/heats-service.ts';
 import * as photosService from '../server/modules/photos/photos-service.ts';
-import { DEMO_CRUCIBLES, DEMO_FURNACES, DEMO_MOULDS, buildDemoLog } from './demo-log.ts';
+import { DEMO_CRUCIBLES, DEMO_FURNACES, DEMO_LOG_SEED, DEMO_MOULDS, buildDemoLog } from './demo-log.ts';
 import { DEMO_WORKSHOP } from './demo-people.ts';
 import { drawPiecePhoto, rng } from './photo-generator.ts';
 
@@ -60,7 +60,7 @@ export async function up({ sequelize }: { sequelize: Sequelize }) {
     moulds.set(m.key, (await equipmentService.createMould(admin, w, mouldCreateSchema.parse(fields))).id);
   }
 
-  const r = rng(20261201);
+  const r = rng(DEMO_LOG_SEED);
   let photoSeed = 1;
   for (const heat of buildDemoLog(r)) {
     const caster = actor(heat.caster);

@@ -8,6 +8,9 @@ import type { PieceShape, Rng } from './photo-generator.ts';
  * ingots with no riser). Nothing here is measured; it is there to look at.
  */
 
+/** The seed the demo log is drawn from; the same seed draws the same term. */
+export const DEMO_LOG_SEED = 20261201;
+
 export const DEMO_FURNACES = [
   { key: 'electric', name: 'Shed kiln (electric)', kind: 'electric' as const, notes: 'Reads about 15 °C hot: the metal ends up below the setpoint.' },
   { key: 'gas', name: 'Propane bucket', kind: 'gas' as const, notes: 'Outdoors on the slab. No controller; setpoint column left empty.' },

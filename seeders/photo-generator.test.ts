@@ -1,6 +1,6 @@
 import sharp from 'sharp';
 import { describe, expect, test } from 'vitest';
-import { buildDemoLog } from './demo-log.ts';
+import { DEMO_LOG_SEED, buildDemoLog } from './demo-log.ts';
 import { DRAWABLE_KINDS, drawPiecePhoto, rng } from './photo-generator.ts';
 
 describe('drawPiecePhoto', () => {
@@ -26,7 +26,7 @@ describe('drawPiecePhoto', () => {
 
 describe('buildDemoLog', () => {
   test('when built, then it holds 60 or more heats over four months, and no casting outweighs its charge', () => {
-    const log = buildDemoLog(rng(20261201));
+    const log = buildDemoLog(rng(DEMO_LOG_SEED));
     expect(log.length).toBeGreaterThanOrEqual(60);
     const months = new Set(log.map((h) => h.pouredAt.getUTCMonth()));
     expect(months.size).toBeGreaterThanOrEqual(4);
@@ -38,7 +38,7 @@ describe('buildDemoLog', () => {
   });
 
   test('when a student pours hot without degassing, then the log says gas; cold winter moulds say rounded edges', () => {
-    const log = buildDemoLog(rng(20261201));
+    const log = buildDemoLog(rng(DEMO_LOG_SEED));
     const jonah = log.filter((h) => h.caster.startsWith('jonah'));
     expect(jonah.every((h) => h.pourTempC >= 775)).toBe(true);
     const samWinter = log.filter((h) => h.caster.startsWith('sam') && h.pouredAt.getUTCMonth() >= 9);
