@@ -1,5 +1,5 @@
+import { heatVisibilitySql, type HeatVisibility } from '../../db/heat-visibility.ts';
 import { QueryTypes } from 'sequelize';
-import type { Access } from '../../../shared/auth/permissions.ts';
 import type { ChargeKind } from '../../../shared/domain/index.ts';
 import type { CrucibleMaterial } from '../../../shared/heats/crucible-life.ts';
 import type { CrucibleShock, FurnaceKind } from '../../../shared/heats/equipment-schemas.ts';
@@ -26,7 +26,7 @@ const given = <T extends object>(values: T): Partial<T> =>
   Object.fromEntries(Object.entries(values).filter(([, v]) => v !== undefined)) as Partial<T>;
 
 /** Which heats the actor may see: the reach from accessFor plus who they are. */
-export type HeatVisibility = { access: readonly Access[]; actorId: string };
+export type { HeatVisibility } from '../../db/heat-visibility.ts';
 
 /** A heat as stored, with its lines, castings and the crucible's heat number at it. */
 export type HeatRecord = Omit<HeatDetail, 'castings' | 'crucible' | 'figures' | 'cautions' | 'conditions'> & {
@@ -40,18 +40,6 @@ export type HeatWrite = Omit<HeatCreateInput, 'casterId'> & { casterId: string }
 
 // ── visibility and filters ──────────────────────────────────────────────────
 
-/** SQL for "the actor may read this heat", over alias h. */
-function visibilitySql(v: HeatVisibility): string {
-  if (v.access.includes('any')) return 'true';
-  const parts: string[] = [];
-  if (v.access.includes('own')) parts.push('h.caster_id = :actorId');
-  if (v.access.includes('mentee')) {
-    parts.push(
-      'h.caster_id IN (SELECT a.student_id FROM mentor_assignments a WHERE a.workshop_id = h.workshop_id AND a.mentor_id = :actorId)',
-    );
-  }
-  return parts.length ? `(${parts.join(' OR ')})` : 'false';
-}
 
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString();
 const isDay = (v: string) => /^\d{4}-\d{2}-\d{2}$/.test(v);
@@ -148,7 +136,7 @@ export async function listHeatRows(
   page: { limit: number; after?: KeysetPosition },
 ): Promise<HeatListRecord[]> {
   const replacements: Record<string, unknown> = { workshopId, actorId: visibility.actorId, limit: page.limit };
-  const where = ['h.workshop_id = :workshopId', visibilitySql(visibility), ...filterSql(filter, replacements)];
+  const where = ['h.workshop_id = :workshopId', heatVisibilitySql(visibility), ...filterSql(filter, replacements)];
   const { expr, cast } = SORT_SQL[filter.sort];
   const cmp = filter.dir === 'asc' ? '>' : '<';
   const dir = filter.dir === 'asc' ? 'ASC' : 'DESC';

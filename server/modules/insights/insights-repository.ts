@@ -1,5 +1,5 @@
+import { heatVisibilitySql, type HeatVisibility } from '../../db/heat-visibility.ts';
 import { QueryTypes } from 'sequelize';
-import type { Access } from '../../../shared/auth/permissions.ts';
 import type { CrucibleMaterial } from '../../../shared/heats/crucible-life.ts';
 import type { FurnaceKind } from '../../../shared/heats/equipment-schemas.ts';
 import type { InsightFilter } from '../../../shared/insights/insight-schemas.ts';
@@ -10,34 +10,18 @@ import { sequelize } from '../../db/sequelize.ts';
 // no other module's repository or models are imported.
 
 /** Which heats the reader may see: the heat log's visibility (heats-service visibilityOf). */
-export type HeatVisibility = { access: readonly Access[]; actorId: string };
+export type { HeatVisibility } from '../../db/heat-visibility.ts';
 
 const num = (v: unknown): number | null => (v === null || v === undefined ? null : Number(v));
 const iso = (d: Date | string) => new Date(d).toISOString();
 
-/**
- * "The actor may read this heat", over alias h: the same rule, with the same
- * mentor_assignments lookup, as the heat log's list (heats-repository), so a
- * bar never counts a heat its link to the heat log would not show.
- */
-function visibilitySql(v: HeatVisibility): string {
-  if (v.access.includes('any')) return 'true';
-  const parts: string[] = [];
-  if (v.access.includes('own')) parts.push('h.caster_id = :actorId');
-  if (v.access.includes('mentee')) {
-    parts.push(
-      'h.caster_id IN (SELECT a.student_id FROM mentor_assignments a WHERE a.workshop_id = h.workshop_id AND a.mentor_id = :actorId)',
-    );
-  }
-  return parts.length ? `(${parts.join(' OR ')})` : 'false';
-}
 
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString();
 
 /** The WHERE clause over heats h for one workshop, the reader and the filters (days in UTC, `to` inclusive, as the heat log). */
 function scope(workshopId: string, visibility: HeatVisibility, f: Partial<InsightFilter>) {
   const replacements: Record<string, unknown> = { workshopId, actorId: visibility.actorId };
-  const where = ['h.workshop_id = :workshopId', visibilitySql(visibility)];
+  const where = ['h.workshop_id = :workshopId', heatVisibilitySql(visibility)];
   if (f.alloy) {
     where.push('h.alloy = :alloy');
     replacements.alloy = f.alloy;
