@@ -5,7 +5,9 @@ import {
   ClipboardList,
   Flame,
   Images,
+  Inbox,
   Library,
+  ListChecks,
   Settings,
   ShieldAlert,
   Thermometer,
@@ -43,6 +45,13 @@ export function buildNavItems(workshop: Workshop | null, user: CurrentUser): Nav
     { id: 'safety', label: 'Safety', href: paths.safety.getHref(), icon: ShieldAlert, placement: 'more' },
     { id: 'settings', label: 'Settings', href: paths.settings.getHref(), icon: Settings, placement: 'more' },
   );
+  // The review queue and the workshop's rules are mentors' and admins' work.
+  if (workshop && (workshop.role === 'mentor' || workshop.role === 'admin')) {
+    items.push(
+      { id: 'review', label: 'Review queue', href: paths.review.getHref(workshop.id), icon: Inbox, placement: 'more' },
+      { id: 'rules', label: 'Rules', href: paths.rules.getHref(workshop.id), icon: ListChecks, placement: 'more' },
+    );
+  }
   if (workshop && can({ id: user.id, role: workshop.role }, 'manage', 'member')) {
     items.push({ id: 'members', label: 'Members', href: paths.members.getHref(workshop.id), icon: Users, placement: 'more' });
   }

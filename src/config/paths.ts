@@ -101,6 +101,17 @@ export const paths = {
     getHref: (workshopId: string, heatId: string, castingId: string) =>
       `/w/${encodeURIComponent(workshopId)}/heats/${encodeURIComponent(heatId)}/castings/${encodeURIComponent(castingId)}`,
   },
+  report: {
+    path: '/w/:workshopId/reports/:reportId',
+    getHref: (workshopId: string, reportId: string) => `/w/${encodeURIComponent(workshopId)}/reports/${encodeURIComponent(reportId)}`,
+  },
+  quickCheck: inWorkshop('quick-check'),
+  review: inWorkshop('review'),
+  student: {
+    path: '/w/:workshopId/students/:userId',
+    getHref: (workshopId: string, userId: string) => `/w/${encodeURIComponent(workshopId)}/students/${encodeURIComponent(userId)}`,
+  },
+  rules: inWorkshop('rules'),
 } as const;
 
 /**

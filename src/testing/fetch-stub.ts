@@ -28,7 +28,10 @@ export function apiError(status: number, code: string, message = code, extra: Re
  * value is a handler, or a body to answer 200 with. A request nobody
  * expected logs console.error, which fails the test (see setup-tests.ts).
  */
-export function stubApi(routes: Record<string, Handler | object>) {
+export function stubApi(stubbed: Record<string, Handler | object>) {
+  // The shell's notification bell asks for its count on every signed-in page;
+  // an empty list unless the test says otherwise.
+  const routes: Record<string, Handler | object> = { 'GET /api/notifications': { items: [], unreadCount: 0, nextCursor: null }, ...stubbed };
   const requests: StubbedRequest[] = [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
     const url = new URL(input instanceof Request ? input.url : String(input), 'http://localhost');

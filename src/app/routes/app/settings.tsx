@@ -12,6 +12,7 @@ import { ChangePasswordForm } from '#src/features/auth/components/change-passwor
 import { SignOutEverywhere } from '#src/features/auth/components/sign-out-everywhere.tsx';
 import { TwoStepPanel } from '#src/features/auth/components/two-step-panel.tsx';
 import { useCurrentUser } from '#src/features/auth/hooks/use-current-user.ts';
+import { NotificationPreferences } from '#src/features/notifications/components/notification-preferences.tsx';
 import { PreferencesForm } from '#src/features/preferences/components/preferences-form.tsx';
 import { workshopQueries } from '#src/features/workshops/api/workshop-queries.ts';
 import { can } from '#shared/auth/permissions.ts';
@@ -44,6 +45,7 @@ export default function SettingsPage() {
             })
           }
         />
+        <NotificationPreferences />
         <TwoStepPanel user={user} />
         <ChangePasswordForm />
         <SignOutEverywhere />

@@ -11,6 +11,7 @@ import { useUpdatePreferences } from '#src/features/auth/api/use-update-preferen
 import { useCurrentUser } from '#src/features/auth/hooks/use-current-user.ts';
 import { requireUser } from '#src/features/auth/lib/require-session.ts';
 import type { ChangePreferences } from '#src/features/preferences/components/preference-controls.tsx';
+import { NotificationBell } from '#src/features/notifications/components/notification-bell.tsx';
 import { UserMenu } from '#src/features/preferences/components/user-menu.tsx';
 import { workshopQueries } from '#src/features/workshops/api/workshop-queries.ts';
 import { WorkshopSwitcher } from '#src/features/workshops/components/workshop-switcher.tsx';
@@ -49,12 +50,15 @@ export default function ShellLayout() {
       navItems={buildNavItems(workshop, user)}
       topBarStart={<WorkshopSwitcher currentWorkshopId={workshop?.id} />}
       topBarEnd={
-        <UserMenu
+        <div className="flex items-center gap-1">
+          <NotificationBell />
+          <UserMenu
           user={user}
           onChange={changePreferences}
           signingOut={signOut.isPending}
           onSignOut={() => signOut.mutate(undefined, { onError: (error) => toast.error(`Not signed out: ${errorMessage(error)}`) })}
-        />
+          />
+        </div>
       }
     >
       {/* A thin bar while the next page loads; no spinner. */}

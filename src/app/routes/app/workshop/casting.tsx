@@ -1,10 +1,11 @@
-import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { useQuery, useQueryClient, useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
 import { ArrowLeft } from 'lucide-react';
-import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { can } from '#shared/auth/permissions.ts';
 import type { Actor } from '#shared/auth/roles.ts';
 import type { CurrentUser } from '#shared/auth/auth-schemas.ts';
-import { ButtonLink } from '#src/components/ui/button.tsx';
+import { Button, ButtonLink } from '#src/components/ui/button.tsx';
 import { ErrorPanel, type ErrorFallbackProps } from '#src/components/ui/error-boundary.tsx';
 import { Notice } from '#src/components/ui/notice.tsx';
 import { PageHeader } from '#src/components/ui/page-header.tsx';
@@ -19,7 +20,9 @@ import { photoQueries } from '#src/features/photos/api/photo-queries.ts';
 import { CastingPhotoGrid } from '#src/features/photos/components/casting-photo-grid.tsx';
 import { CastingSummary } from '#src/features/photos/components/casting-summary.tsx';
 import { PhotoUploader } from '#src/features/photos/components/photo-uploader.tsx';
-import { workshopQueries } from '#src/features/workshops/api/workshop-queries.ts';
+import { memberQueries, workshopQueries } from '#src/features/workshops/api/workshop-queries.ts';
+import { LikelyCausesPanel } from '#src/features/diagnosis/components/likely-causes-panel.tsx';
+import { ReportCreateForm } from '#src/features/reports/components/report-create-form.tsx';
 import { isApiError } from '#src/lib/api-client.ts';
 import { formatDateTime } from '#src/lib/format.ts';
 
@@ -112,7 +115,7 @@ function CastingOverview({
               <p>{heat.casterName} or an admin of the workshop can add photos here. You can mark defects on the photos already added.</p>
             </Notice>
           )}
-          <DiagnosisSlot workshopId={workshopId} heatId={heatId} castingId={castingId} />
+          <DiagnosisSlot workshopId={workshopId} heatId={heatId} castingId={castingId} mayRecord={mayUpload} user={user} />
         </div>
         <CastingSummary heat={heat} casting={casting} massUnit={user.massUnit} temperatureUnit={user.temperatureUnit} />
       </div>
@@ -121,13 +124,48 @@ function CastingOverview({
 }
 
 /**
- * Slot for the casting's diagnosis panel (the likely causes, with evidence
- * and the fix to try) and its defect report. Both read this casting's marks;
- * they mount here, under the photos, once they are built. Renders nothing
- * until then.
+ * The casting's likely causes (evidence, fix to try, what-if) and, for its
+ * caster, the way to ask a mentor about it. Composed here because the
+ * diagnosis and reports features never import each other.
  */
-function DiagnosisSlot(_props: { workshopId: string; heatId: string; castingId: string }) {
-  return null;
+function DiagnosisSlot({ workshopId, heatId, castingId, mayRecord, user }: { workshopId: string; heatId: string; castingId: string; mayRecord: boolean; user: CurrentUser }) {
+  const queryClient = useQueryClient();
+  const navigate = useNavigate();
+  const photos = useQuery(photoQueries.list(workshopId, { castingId }));
+  const members = useQuery(memberQueries.list(workshopId));
+  const [asking, setAsking] = useState(false);
+  const mentors = (members.data ?? []).filter((m) => m.role === 'mentor' || m.role === 'admin').map((m) => ({ userId: m.userId, displayName: m.displayName }));
+  return (
+    <section aria-label="Diagnosis" className="flex flex-col gap-4">
+      <LikelyCausesPanel
+        workshopId={workshopId}
+        heatId={heatId}
+        castingId={castingId}
+        temperatureUnit={user.temperatureUnit}
+        canRecord={mayRecord}
+        heatFormHref={paths.heatEdit.getHref(workshopId, heatId)}
+        onRecorded={() => queryClient.invalidateQueries({ queryKey: castingQueries.heats() })}
+      />
+      {mayRecord ? (
+        asking ? (
+          <div className="flex flex-col gap-2 rounded-md border border-line p-3">
+            <h2 className="text-title font-semibold text-ink">Ask a mentor</h2>
+            <ReportCreateForm
+              workshopId={workshopId}
+              castingId={castingId}
+              photos={photos.data?.items ?? []}
+              mentors={mentors}
+              onCreated={(report) => navigate(paths.report.getHref(workshopId, report.id))}
+            />
+          </div>
+        ) : (
+          <Button className="self-start" onClick={() => setAsking(true)}>
+            Ask a mentor about this casting
+          </Button>
+        )
+      ) : null}
+    </section>
+  );
 }
 
 function HeatNotOpen({ error, reset, workshopId }: ErrorFallbackProps & { workshopId: string }) {

@@ -1,7 +1,10 @@
 import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Zap } from 'lucide-react';
+import { ButtonLink } from '#src/components/ui/button.tsx';
 import { PageHeader } from '#src/components/ui/page-header.tsx';
+import { paths } from '#src/config/paths.ts';
 import { requireUser } from '#src/features/auth/lib/require-session.ts';
 import { photoQueries } from '#src/features/photos/api/photo-queries.ts';
 import { GalleryView } from '#src/features/photos/components/gallery-view.tsx';
@@ -31,7 +34,15 @@ export default function GalleryPage() {
   );
   return (
     <>
-      <PageHeader title="Gallery" description="Photos of the workshop's castings, with their marked defects." />
+      <PageHeader
+        title="Gallery"
+        description="Photos of the workshop's castings, with their marked defects."
+        actions={
+          <ButtonLink to={paths.quickCheck.getHref(workshopId)} variant="primary" icon={<Zap aria-hidden className="size-4" />}>
+            Quick check
+          </ButtonLink>
+        }
+      />
       <GalleryView workshopId={workshopId} casters={casters} />
     </>
   );
