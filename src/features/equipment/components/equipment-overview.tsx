@@ -82,6 +82,35 @@ function AddButton({ label, onClick }: { label: string; onClick: () => void }) {
   );
 }
 
+/** What a failed or finished delete says. */
+function deletedToasts(name: string) {
+  return {
+    onSuccess: () => toast.success(`${name} deleted.`),
+    onError: (error: unknown) => toast.error(`Not deleted: ${errorMessage(error)}`),
+  };
+}
+
+/** Edit, and delete behind a confirm for equipment no heat or casting uses. */
+function EditOrDelete(props: { name: string; deletable: boolean; pending: boolean; onEdit: () => void; onDelete: () => void }) {
+  return (
+    <div className="flex flex-wrap gap-2">
+      <Button size="sm" variant="quiet" icon={<Pencil aria-hidden className="size-4" />} onClick={props.onEdit}>
+        Edit<span className="sr-only"> {props.name}</span>
+      </Button>
+      {props.deletable ? (
+        <ConfirmInline
+          trigger={<>Delete<span className="sr-only"> {props.name}</span></>}
+          triggerIcon={<Trash2 aria-hidden className="size-4" />}
+          question={`Delete ${props.name}?`}
+          confirmLabel="Yes, delete"
+          pending={props.pending}
+          onConfirm={props.onDelete}
+        />
+      ) : null}
+    </div>
+  );
+}
+
 function FurnacesCard({ workshopId, furnaces, canManage }: { workshopId: string; furnaces: Furnace[]; canManage: boolean }) {
   const [editing, setEditing] = useState<string | 'new' | null>(null);
   const remove = useDeleteFurnace(workshopId);
@@ -107,26 +136,13 @@ function FurnacesCard({ workshopId, furnaces, canManage }: { workshopId: string;
                   </div>
                   {f.notes ? <p className="max-w-prose text-body text-ink">{f.notes}</p> : null}
                   {canManage ? (
-                    <div className="flex flex-wrap gap-2">
-                      <Button size="sm" variant="quiet" icon={<Pencil aria-hidden className="size-4" />} onClick={() => setEditing(f.id)}>
-                        Edit<span className="sr-only"> {f.name}</span>
-                      </Button>
-                      {f.heatCount === 0 ? (
-                        <ConfirmInline
-                          trigger={<>Delete<span className="sr-only"> {f.name}</span></>}
-                          triggerIcon={<Trash2 aria-hidden className="size-4" />}
-                          question={`Delete ${f.name}?`}
-                          confirmLabel="Yes, delete"
-                          pending={remove.isPending}
-                          onConfirm={() =>
-                            remove.mutate(f.id, {
-                              onSuccess: () => toast.success(`${f.name} deleted.`),
-                              onError: (error) => toast.error(`Not deleted: ${errorMessage(error)}`),
-                            })
-                          }
-                        />
-                      ) : null}
-                    </div>
+                    <EditOrDelete
+                      name={f.name}
+                      deletable={f.heatCount === 0}
+                      pending={remove.isPending}
+                      onEdit={() => setEditing(f.id)}
+                      onDelete={() => remove.mutate(f.id, deletedToasts(f.name))}
+                    />
                   ) : null}
                 </>
               )}
@@ -240,12 +256,7 @@ function CrucibleList({
                       question={`Delete ${c.name}?`}
                       confirmLabel="Yes, delete"
                       pending={remove.isPending}
-                      onConfirm={() =>
-                        remove.mutate(c.id, {
-                          onSuccess: () => toast.success(`${c.name} deleted.`),
-                          onError: (error) => toast.error(`Not deleted: ${errorMessage(error)}`),
-                        })
-                      }
+                      onConfirm={() => remove.mutate(c.id, deletedToasts(c.name))}
                     />
                   ) : null}
                 </div>
@@ -295,26 +306,13 @@ function MouldsCard({ workshopId, moulds, units, canManage }: { workshopId: stri
                   </p>
                   {m.notes ? <p className="max-w-prose text-body text-ink">{m.notes}</p> : null}
                   {canManage ? (
-                    <div className="flex flex-wrap gap-2">
-                      <Button size="sm" variant="quiet" icon={<Pencil aria-hidden className="size-4" />} onClick={() => setEditing(m.id)}>
-                        Edit<span className="sr-only"> {m.name}</span>
-                      </Button>
-                      {m.castingCount === 0 ? (
-                        <ConfirmInline
-                          trigger={<>Delete<span className="sr-only"> {m.name}</span></>}
-                          triggerIcon={<Trash2 aria-hidden className="size-4" />}
-                          question={`Delete ${m.name}?`}
-                          confirmLabel="Yes, delete"
-                          pending={remove.isPending}
-                          onConfirm={() =>
-                            remove.mutate(m.id, {
-                              onSuccess: () => toast.success(`${m.name} deleted.`),
-                              onError: (error) => toast.error(`Not deleted: ${errorMessage(error)}`),
-                            })
-                          }
-                        />
-                      ) : null}
-                    </div>
+                    <EditOrDelete
+                      name={m.name}
+                      deletable={m.castingCount === 0}
+                      pending={remove.isPending}
+                      onEdit={() => setEditing(m.id)}
+                      onDelete={() => remove.mutate(m.id, deletedToasts(m.name))}
+                    />
                   ) : null}
                 </>
               )}
